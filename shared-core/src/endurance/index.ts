@@ -1,0 +1,2 @@
+export { rotatingBeamEndurance } from './enduranceLimit';
+export { fatigueStrengthFraction } from './strengthFraction';

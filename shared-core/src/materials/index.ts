@@ -1,0 +1,2 @@
+export type { Material, MaterialClass } from './library';
+export { editDistance, findMaterial, MATERIALS, nearestMaterialKeys } from './library';
