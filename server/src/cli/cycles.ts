@@ -1,0 +1,330 @@
+/**
+ * `fatigue-notes cycles FILE.csv [--column N|NAME] [--format text|json] [--gate RANGE] [--bins N]`
+ *
+ * Rainflow-counts one column of a load history (ASTM E1049-85 (2017) 5.4.4, three-point
+ * rules, residue counted as half cycles) with the core's streaming counter. The file is read
+ * in 64 KiB chunks and the output is written as it is produced, so memory stays bounded
+ * whatever the size of the file (with --bins the file is read twice: once for its extremes,
+ * which fix the histogram's limits, once to count).
+ *
+ * Output, in the history's units:
+ * - json: `{ "cycles": [ { "range": R, "mean": M, "count": 0.5 | 1 } ... ], "summary": {...},
+ *   "issues": [...] }` (plus `"histogram"` with --bins), the contract's shape extended.
+ * - text: a table of the cycles in counting order and the totals; with --bins the non-empty
+ *   range-mean bins instead of the cycles.
+ *
+ * Exit codes: 0 counted, no error; 1 data errors: a missing column (the available columns
+ * are listed), fewer than three points, or rows whose value is not a number (each reported
+ * on stderr with its line; those rows are skipped and the rest is still counted and
+ * printed, so that one bad row does not hide the result but does fail a CI job);
+ * 2 usage error or unreadable file.
+ */
+import { createReadStream } from 'node:fs';
+import { stat } from 'node:fs/promises';
+import { resolve } from 'node:path';
+import {
+  HistoryCsvReader,
+  type HistoryIssue,
+  histogramLimitsFor,
+  RAINFLOW_SOURCE,
+  RainflowCounter,
+  type RainflowResult,
+  RangeMeanHistogram,
+} from '@fatigue-notes/core/src/rainflow';
+import type { Io } from './io';
+
+const USAGE =
+  'usage: fatigue-notes cycles FILE.csv [--column N|NAME] [--format text|json] [--gate RANGE] [--bins N]\n';
+const CHUNK = 64 * 1024;
+const FLUSH_AT = 64 * 1024;
+
+interface CyclesArgs {
+  file: string;
+  column?: string;
+  format: 'text' | 'json';
+  gate: number;
+  bins?: number;
+}
+
+function parseArgs(args: string[]): CyclesArgs | { error: string } | { help: true } {
+  let file: string | undefined;
+  let column: string | undefined;
+  let format: 'text' | 'json' = 'text';
+  let gate = 0;
+  let bins: number | undefined;
+  for (let i = 0; i < args.length; i++) {
+    let arg = args[i];
+    let value: string | undefined;
+    if (arg === '-h' || arg === '--help') return { help: true };
+    if (arg.startsWith('--') && arg.includes('=')) {
+      value = arg.slice(arg.indexOf('=') + 1);
+      arg = arg.slice(0, arg.indexOf('='));
+    }
+    const take = (): string | undefined => {
+      if (value !== undefined) return value;
+      if (i + 1 >= args.length) return undefined;
+      return args[++i];
+    };
+    switch (arg) {
+      case '--column': {
+        const v = take();
+        if (v === undefined || v.trim() === '')
+          return { error: '--column needs a column name or a 1-based index' };
+        column = v;
+        break;
+      }
+      case '--format': {
+        const v = take();
+        if (v !== 'text' && v !== 'json')
+          return { error: `--format must be text or json${v ? `, not "${v}"` : ''}` };
+        format = v;
+        break;
+      }
+      case '--gate': {
+        const v = take();
+        const g = v === undefined ? Number.NaN : Number(v);
+        if (v === undefined || v.trim() === '' || !Number.isFinite(g) || g < 0) {
+          return { error: '--gate needs a range >= 0 in the units of the history' };
+        }
+        gate = g;
+        break;
+      }
+      case '--bins': {
+        const v = take();
+        const n = v === undefined ? Number.NaN : Number(v);
+        if (!Number.isInteger(n) || n < 1 || n > 1000)
+          return { error: '--bins needs a whole number from 1 to 1000' };
+        bins = n;
+        break;
+      }
+      default:
+        if (arg.startsWith('-') && arg !== '-') return { error: `unknown option "${arg}"` };
+        if (file !== undefined) return { error: 'give exactly one history file' };
+        file = arg;
+    }
+  }
+  if (file === undefined) return { error: 'give the history file to count' };
+  return { file, column, format, gate, bins };
+}
+
+/** Collects output text and hands it to `write` in pieces of about 64 KiB. */
+class Output {
+  private parts: string[] = [];
+  private size = 0;
+  constructor(private readonly write: (s: string) => void) {}
+  put(s: string): void {
+    this.parts.push(s);
+    this.size += s.length;
+    if (this.size >= FLUSH_AT) this.flush();
+  }
+  flush(): void {
+    if (this.parts.length === 0) return;
+    this.write(this.parts.join(''));
+    this.parts = [];
+    this.size = 0;
+  }
+}
+
+class ReadFailure extends Error {}
+
+/** Streams the file through the reader; stops early when the reader gives up. */
+async function feedFile(path: string, reader: HistoryCsvReader): Promise<void> {
+  const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: CHUNK });
+  try {
+    for await (const chunk of stream) {
+      reader.feed(chunk as string);
+      if (reader.fatal) break;
+    }
+  } catch (e) {
+    throw new ReadFailure((e as Error).message);
+  } finally {
+    stream.destroy();
+  }
+  reader.end();
+}
+
+/** Shortest readable form of a number for the text table (6 significant digits). */
+function fmt(x: number): string {
+  if (x === 0) return '0';
+  const s = Number(x.toPrecision(6)).toString();
+  return s;
+}
+
+function issueLine(file: string, i: HistoryIssue): string {
+  return `${file}${i.line > 0 ? `:${i.line}` : ''}: ${i.severity}: ${i.message} [${i.code}]\n`;
+}
+
+export async function runCyclesCommand(args: string[], io: Io): Promise<number> {
+  const parsed = parseArgs(args);
+  if ('help' in parsed) {
+    io.stdout(USAGE);
+    return 0;
+  }
+  if ('error' in parsed) {
+    io.stderr(`fatigue-notes cycles: ${parsed.error}\n${USAGE}`);
+    return 2;
+  }
+  const { file, column, format, gate, bins } = parsed;
+  const path = resolve(io.cwd, file);
+  try {
+    const st = await stat(path);
+    if (!st.isFile()) {
+      io.stderr(`fatigue-notes cycles: ${file} is not a file\n`);
+      return 2;
+    }
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    io.stderr(
+      `fatigue-notes cycles: cannot read ${file}: ${code === 'ENOENT' ? 'no such file' : (e as Error).message}\n`,
+    );
+    return 2;
+  }
+
+  try {
+    // With --bins: a first pass for the extremes, which bound every range and mean.
+    let histogram: RangeMeanHistogram | undefined;
+    if (bins !== undefined) {
+      let lo = Number.POSITIVE_INFINITY;
+      let hi = Number.NEGATIVE_INFINITY;
+      const scan = new HistoryCsvReader({
+        column,
+        onValue: (x) => {
+          if (x < lo) lo = x;
+          if (x > hi) hi = x;
+        },
+      });
+      await feedFile(path, scan);
+      if (!scan.fatal && lo <= hi) histogram = new RangeMeanHistogram(histogramLimitsFor(lo, hi, bins));
+    }
+
+    const out = new Output(io.stdout);
+    let started = false;
+    let rows = 0;
+    let reader: HistoryCsvReader;
+    const title = () =>
+      `Rainflow cycles of ${file}, ${reader.header ? `column ${reader.columnIndex + 1} "${reader.columnName}"` : `column ${reader.columnIndex + 1}`}` +
+      `${gate > 0 ? `, gate ${fmt(gate)}` : ''} (ASTM E1049-85 (2017) 5.4.4; residue counted as half cycles)\n`;
+    const start = () => {
+      started = true;
+      if (format === 'json') out.put('{"cycles":[');
+      else {
+        out.put(title());
+        if (!histogram) out.put(`${'range'.padStart(14)}${'mean'.padStart(14)}${'count'.padStart(7)}\n`);
+      }
+    };
+    const onCycle = (range: number, mean: number, count: number) => {
+      if (!started) start();
+      if (histogram) histogram.add(range, mean, count);
+      if (format === 'json') {
+        out.put(
+          `${rows === 0 ? '\n' : ',\n'}{"range":${JSON.stringify(range)},"mean":${JSON.stringify(mean)},"count":${count}}`,
+        );
+      } else if (!histogram) {
+        out.put(`${fmt(range).padStart(14)}${fmt(mean).padStart(14)}${String(count).padStart(7)}\n`);
+      }
+      rows++;
+    };
+    const counter = new RainflowCounter({ gate, onCycle });
+    reader = new HistoryCsvReader({ column, onValue: (x) => counter.push(x) });
+    await feedFile(path, reader);
+
+    const issues = [...reader.issues];
+    if (reader.fatal) {
+      for (const i of issues) if (i.severity !== 'information') io.stderr(issueLine(file, i));
+      return 1;
+    }
+    const result = counter.finish(); // counts the residue through onCycle
+    for (const n of result.notes) {
+      if (!issues.some((i) => i.code === n.code)) {
+        issues.push({
+          line: 0,
+          code: n.code,
+          message: n.message,
+          severity: n.severity === 'error' ? 'error' : 'warning',
+        });
+      }
+    }
+    if (!started) start();
+    if (format === 'json') writeJsonTail(out, file, reader, result, gate, histogram, issues, rows);
+    else writeTextTail(out, reader, result, histogram);
+    out.flush();
+    for (const i of issues) if (i.severity !== 'information') io.stderr(issueLine(file, i));
+    return issues.some((i) => i.severity === 'error') ? 1 : 0;
+  } catch (e) {
+    if (e instanceof ReadFailure) {
+      io.stderr(`fatigue-notes cycles: cannot read ${file}: ${e.message}\n`);
+      return 2;
+    }
+    throw e;
+  }
+}
+
+function summaryOf(file: string, reader: HistoryCsvReader, r: RainflowResult, gate: number) {
+  return {
+    file,
+    column: reader.header ? reader.columnName : reader.columnIndex + 1,
+    columnIndex: reader.columnIndex + 1,
+    samples: r.sampleCount,
+    skippedRows: reader.badRowCount,
+    turningPoints: r.turningPointCount,
+    fullCycles: r.fullCycles,
+    halfCycles: r.halfCycles,
+    totalCycles: r.totalCycles,
+    maxRange: r.maxRange,
+    min: r.min,
+    max: r.max,
+    gate,
+    method: RAINFLOW_SOURCE,
+  };
+}
+
+function writeJsonTail(
+  out: Output,
+  file: string,
+  reader: HistoryCsvReader,
+  r: RainflowResult,
+  gate: number,
+  histogram: RangeMeanHistogram | undefined,
+  issues: HistoryIssue[],
+  rows: number,
+): void {
+  out.put(rows > 0 ? '\n],\n' : '],\n');
+  out.put(`"summary":${JSON.stringify(summaryOf(file, reader, r, gate))},\n`);
+  if (histogram) {
+    out.put(
+      `"histogram":${JSON.stringify({
+        rangeEdges: histogram.rangeEdges(),
+        meanEdges: histogram.meanEdges(),
+        counts: histogram.matrix(),
+      })},\n`,
+    );
+  }
+  out.put(`"issues":${JSON.stringify(issues)}}\n`);
+}
+
+function writeTextTail(
+  out: Output,
+  reader: HistoryCsvReader,
+  r: RainflowResult,
+  histogram: RangeMeanHistogram | undefined,
+): void {
+  if (histogram) {
+    out.put(
+      `${'range from'.padStart(14)}${'range to'.padStart(14)}${'mean from'.padStart(14)}${'mean to'.padStart(14)}${'cycles'.padStart(10)}\n`,
+    );
+    for (const b of histogram.nonEmpty()) {
+      out.put(
+        `${fmt(b.rangeLow).padStart(14)}${fmt(b.rangeHigh).padStart(14)}${fmt(b.meanLow).padStart(14)}${fmt(b.meanHigh).padStart(14)}${fmt(b.count).padStart(10)}\n`,
+      );
+    }
+  }
+  const plural = (n: number, w: string) => `${fmt(n)} ${w}${n === 1 ? '' : 's'}`;
+  out.put(
+    `Totals: ${plural(r.sampleCount, 'sample')}, ${plural(r.turningPointCount, 'turning point')}; ` +
+      `${plural(r.fullCycles, 'full cycle')} + ${plural(r.halfCycles, 'half cycle')} = ${plural(r.totalCycles, 'cycle')}; ` +
+      `largest range ${fmt(r.maxRange)}; min ${fmt(r.min)}, max ${fmt(r.max)}.\n`,
+  );
+  if (reader.badRowCount > 0)
+    out.put(`${plural(reader.badRowCount, 'row')} without a number skipped (see stderr).\n`);
+  if (reader.blankLineCount > 0) out.put(`${plural(reader.blankLineCount, 'blank line')} skipped.\n`);
+}

@@ -1,0 +1,139 @@
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { runCyclesCommand } from '../src/cli/cycles';
+
+const dir = mkdtempSync(join(tmpdir(), 'fatigue-cycles-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+function file(name: string, text: string): string {
+  writeFileSync(join(dir, name), text);
+  return name;
+}
+
+async function run(args: string[]) {
+  let stdout = '';
+  let stderr = '';
+  let writes = 0;
+  const code = await runCyclesCommand(args, {
+    stdout: (s) => {
+      stdout += s;
+      writes++;
+    },
+    stderr: (s) => {
+      stderr += s;
+    },
+    cwd: dir,
+  });
+  return { code, stdout, stderr, writes };
+}
+
+/** ASTM E1049-85 (Reapproved 2017) Fig. 6 history, with a time column. */
+const ASTM_CSV =
+  'time [s];load [kN]\n' + [-2, 1, -3, 5, -1, 3, -4, 4, -2].map((x, i) => `${i},0;${x},0`).join('\n') + '\n';
+
+describe('fatigue-notes cycles', () => {
+  it('prints the contract JSON for the ASTM E1049-85 (2017) Fig. 6 example: ranges 3: 0.5, 4: 1.5, 6: 0.5, 8: 1, 9: 0.5', async () => {
+    const f = file('astm.csv', ASTM_CSV);
+    const r = await run([f, '--format', 'json']);
+    expect(r.code).toBe(0);
+    expect(r.stderr).toBe('');
+    const json = JSON.parse(r.stdout);
+    const byRange = new Map<number, number>();
+    for (const c of json.cycles) {
+      expect(Object.keys(c)).toEqual(['range', 'mean', 'count']);
+      expect([0.5, 1]).toContain(c.count);
+      byRange.set(c.range, (byRange.get(c.range) ?? 0) + c.count);
+    }
+    expect([...byRange.entries()].sort((a, b) => a[0] - b[0])).toEqual([
+      [3, 0.5],
+      [4, 1.5],
+      [6, 0.5],
+      [8, 1],
+      [9, 0.5],
+    ]);
+    expect(json.summary.column).toBe('load [kN]');
+    expect(json.summary.totalCycles).toBe(4);
+  });
+
+  it('prints a readable table with totals', async () => {
+    const f = file('astm2.csv', ASTM_CSV);
+    const r = await run([f]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('column 2 "load [kN]"');
+    expect(r.stdout).toContain(
+      'Totals: 9 samples, 9 turning points; 1 full cycle + 6 half cycles = 4 cycles; largest range 9',
+    );
+    expect(r.stdout.split('\n').filter((l) => /^\s+\d/.test(l))).toHaveLength(7);
+  });
+
+  it('with --bins prints a range-mean histogram (text and json)', async () => {
+    const f = file('astm3.csv', ASTM_CSV);
+    const t = await run([f, '--bins', '3']);
+    expect(t.code).toBe(0);
+    expect(t.stdout).toContain('range from');
+    const j = JSON.parse((await run([f, '--bins', '3', '--format=json'])).stdout);
+    expect(j.histogram.rangeEdges).toEqual([0, 3, 6, 9]);
+    const total = j.histogram.counts.flat().reduce((s: number, x: number) => s + x, 0);
+    expect(total).toBe(4);
+  });
+
+  it('applies --gate and --column', async () => {
+    const f = file('gate.csv', 't,a,b\n0,0,5\n1,10,-5\n2,9,5\n3,10,-5\n4,0,5\n');
+    const j = JSON.parse((await run([f, '--column', 'a', '--gate', '2', '--format', 'json'])).stdout);
+    expect(j.cycles.every((c: { range: number }) => c.range >= 2)).toBe(true);
+    expect(j.summary.turningPoints).toBe(3);
+    const b = JSON.parse((await run([f, '--column', '3', '--format', 'json'])).stdout);
+    expect(b.summary.column).toBe('b');
+    expect(b.summary.totalCycles).toBe(2);
+  });
+
+  it('exit 1 for a missing column, listing the available ones', async () => {
+    const f = file('cols.csv', 'time,force\n0,1\n1,2\n2,3\n');
+    const r = await run([f, '--column', 'torque']);
+    expect(r.code).toBe(1);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toContain('csv-column-missing');
+    expect(r.stderr).toContain('1: "time", 2: "force"');
+  });
+
+  it('exit 1 for non-numeric rows (reported with their line, skipped, the rest counted) and for fewer than three points', async () => {
+    const f = file('bad.csv', 'load\n1\n-1\noops\n2\n-2\n');
+    const r = await run([f, '--format', 'json']);
+    expect(r.code).toBe(1);
+    expect(r.stderr).toContain('bad.csv:4: error:');
+    const j = JSON.parse(r.stdout);
+    expect(j.summary.samples).toBe(4);
+    expect(
+      j.issues.some((i: { code: string; line: number }) => i.code === 'csv-non-numeric' && i.line === 4),
+    ).toBe(true);
+    const few = await run([file('few.csv', 'load\n1\n2\n')]);
+    expect(few.code).toBe(1);
+    expect(few.stderr).toContain('history-too-few-points');
+  });
+
+  it('exit 2 for usage errors and unreadable files', async () => {
+    expect((await run([])).code).toBe(2);
+    expect((await run(['a.csv', '--format', 'xml'])).code).toBe(2);
+    expect((await run(['a.csv', '--gate', '-1'])).code).toBe(2);
+    expect((await run(['a.csv', '--bins', '0'])).code).toBe(2);
+    expect((await run(['a.csv', '--frobnicate'])).code).toBe(2);
+    const missing = await run(['no-such-file.csv']);
+    expect(missing.code).toBe(2);
+    expect(missing.stderr).toContain('no such file');
+    expect((await run(['.'])).code).toBe(2);
+  });
+
+  it('streams a large file: 1e6 rows, output written in many pieces', async () => {
+    const lines: string[] = ['t,x'];
+    for (let i = 0; i < 1_000_000; i++) lines.push(`${i},${Math.sin(i * 0.7) * 100 + (i % 7)}`);
+    const f = file('big.csv', `${lines.join('\n')}\n`);
+    const r = await run([f, '--format', 'json']);
+    expect(r.code).toBe(0);
+    expect(r.writes).toBeGreaterThan(10);
+    const j = JSON.parse(r.stdout);
+    expect(j.summary.samples).toBe(1_000_000);
+    expect(j.cycles.reduce((s: number, c: { count: number }) => s + c.count, 0)).toBe(j.summary.totalCycles);
+  });
+});
