@@ -1,0 +1,53 @@
+/** Entry of the `fatigue-notes` command: check, cycles, lsp, report, compare. */
+import { runCheckCommand } from './check';
+import { runCyclesCommand } from './cycles';
+import { type Io, processIo } from './io';
+import { VERSION } from './version';
+
+const USAGE = `fatigue-notes ${VERSION}: evaluate fatigue design-check blocks in Markdown calc notes
+
+usage:
+  fatigue-notes check PATH... [--format text|json|sarif]
+  fatigue-notes cycles FILE.csv [--column N|NAME] [--format text|json] [--gate RANGE] [--bins N]
+  fatigue-notes lsp --stdio
+
+The tool assists a qualified engineer; local codes, standards and licensed practice govern.
+`;
+
+export async function main(argv: string[], io: Io): Promise<number> {
+  const [cmd, ...rest] = argv;
+  switch (cmd) {
+    case 'check':
+      return runCheckCommand(rest, io);
+    case 'cycles':
+      return runCyclesCommand(rest, io);
+    case 'lsp': {
+      const { startServer } = await import('../lsp/server');
+      startServer();
+      return -1;
+    }
+    case '--version':
+    case '-v':
+      io.stdout(`${VERSION}\n`);
+      return 0;
+    case undefined:
+    case '--help':
+    case '-h':
+    case 'help':
+      io.stdout(USAGE);
+      return cmd === undefined ? 2 : 0;
+    default:
+      io.stderr(`fatigue-notes: unknown command "${cmd}"\n${USAGE}`);
+      return 2;
+  }
+}
+
+main(process.argv.slice(2), processIo).then(
+  (code) => {
+    if (code >= 0) process.exitCode = code;
+  },
+  (e) => {
+    process.stderr.write(`fatigue-notes: ${e instanceof Error ? e.stack : String(e)}\n`);
+    process.exitCode = 2;
+  },
+);

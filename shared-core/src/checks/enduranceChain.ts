@@ -1,0 +1,271 @@
+/**
+ * Marin factors, the corrected endurance limit (or the corrected strength at a reference
+ * life for a material without one), the fatigue strength fraction and the S-N line.
+ */
+import { computed } from '../computed';
+import { fatigueStrengthFraction, rotatingBeamEndurance } from '../endurance';
+import { marinCorrected } from '../endurance/marinEquation';
+import type { CheckContext } from '../language/checkContext';
+import {
+  loadFactor,
+  miscFactor,
+  reliabilityFactor,
+  sizeFactorRound,
+  surfaceFactor,
+  temperatureFactor,
+} from '../marin';
+import type { SurfaceFinish } from '../marin/surface';
+import { type SnLine, snLineFromBasquin, snLineThrough } from '../sn';
+import type { Strengths } from './material';
+
+export type LoadKind = 'bending' | 'axial' | 'torsion' | 'combined';
+
+export interface EnduranceChain {
+  /** Se (or Sse for pure torsion), or S_ref at N_ref without an endurance limit. */
+  S: number | null;
+  /** Ultimate of the route: Sut, or Ssu = 0.67 Sut in pure torsion. */
+  Su: number;
+  hasEndurance: boolean;
+  line: SnLine | null;
+  shear: boolean;
+}
+
+/** Marin factors (stated values win) and the corrected strength. */
+export function enduranceChain(
+  ctx: CheckContext,
+  st: Strengths,
+  load: LoadKind,
+  geometry: 'round' | 'plate' | 'shell',
+  hasAxial: boolean,
+): EnduranceChain {
+  const shear = load === 'torsion';
+  const Sut = st.Sut;
+  let ok = true;
+  // ka: surface
+  let ka: number | null = null;
+  const surface = ctx.option('surface') as SurfaceFinish | undefined;
+  if (surface)
+    ka = ctx.result('ka', surfaceFactor(surface, Sut), ['Sut'], { range: ctx.optionRange('surface') });
+  else if (ctx.has('ka')) ka = ctx.input('ka')!;
+  else {
+    ctx.diag(
+      'error',
+      'missing-surface',
+      'surface factor ka cannot be derived: state the finish with `surface:` (ground, machined, cold-drawn, hot-rolled, as-forged) or state `ka`',
+      ctx.header,
+      [ctx.insertFix('Insert `surface: machined` (check the finish)', 'surface: machined')],
+    );
+    ok = false;
+  }
+  if (ka !== null && ctx.has('ka') && surface) ka = ctx.input('ka')!;
+
+  // kb: size
+  let kb: number | null = null;
+  const rotation = (ctx.option('rotation') ?? 'rotating') as 'rotating' | 'non-rotating';
+  if (load === 'axial' || geometry !== 'round') {
+    kb = ctx.result(
+      'kb',
+      sizeFactorRound(ctx.si('d') ?? 0.01, { rotation, load: 'axial', unitSystem: ctx.system }),
+      [],
+      {},
+    );
+    if (ctx.values.kb && ctx.values.kb.origin !== 'stated') {
+      ctx.values.kb.formula = 'kb = 1';
+      ctx.values.kb.inputs = [];
+      ctx.values.kb.terms = undefined;
+    }
+  } else {
+    const d = ctx.input('d');
+    if (d !== undefined && d > 0)
+      kb = ctx.result('kb', sizeFactorRound(d, { rotation, load, unitSystem: ctx.system }), ['d'], {
+        range: ctx.rangeOf('d'),
+      });
+    else if (ctx.has('kb')) kb = ctx.input('kb')!;
+    else {
+      ctx.diag(
+        'error',
+        'missing-size',
+        'size factor kb cannot be derived: state the diameter `d` at the checked section, or `kb`',
+      );
+      ok = false;
+    }
+  }
+
+  // kc: load
+  let kc: number | null;
+  if (ctx.has('kc')) {
+    kc = ctx.input('kc')!;
+    ctx.result('kc', loadFactor(load), [], {});
+    if (hasAxial && load !== 'axial' && kc < 1)
+      ctx.diag(
+        'warning',
+        'kc-axial-twice',
+        'the axial 0.85 is already applied inside sigma_a_eq (combined loading): a stated kc below 1 counts it twice',
+        ctx.rangeOf('kc'),
+      );
+  } else kc = ctx.result('kc', loadFactor(load === 'axial' ? 'combined' : load), [], { range: ctx.header });
+
+  // kd: temperature
+  let kd: number | null;
+  const T = ctx.input('temp');
+  if (T !== undefined) kd = ctx.result('kd', temperatureFactor(T), ['temp'], { range: ctx.rangeOf('temp') });
+  else if (ctx.has('kd')) kd = ctx.input('kd')!;
+  else {
+    const room = ctx.system === 'US' ? '70 degF' : '20 degC';
+    ctx.diag(
+      'warning',
+      'defaulted-temperature',
+      `no operating temperature: room temperature assumed (kd = 1); state \`temp\` or \`kd\``,
+      ctx.header,
+      [ctx.insertFix(`State \`temp = ${room}\``, `temp = ${room}`)],
+    );
+    kd = ctx.result('kd', computed(1, 'kd = 1', 'room temperature assumed: no temperature stated'), [], {
+      origin: 'default',
+      assumption: `operating temperature not stated: room temperature, kd = 1`,
+    });
+  }
+
+  // ke: reliability
+  let ke: number | null;
+  const R = ctx.input('reliability');
+  if (R !== undefined)
+    ke = ctx.result('ke', reliabilityFactor(R), ['reliability'], { range: ctx.rangeOf('reliability') });
+  else if (ctx.has('ke')) ke = ctx.input('ke')!;
+  else {
+    ctx.diag(
+      'warning',
+      'defaulted-reliability',
+      'no reliability stated: 50 % assumed (ke = 1, the mean S-N curve); state `reliability` or `ke`',
+      ctx.header,
+      [
+        ctx.insertFix('State `reliability = 0.99`', 'reliability = 0.99'),
+        { ...ctx.insertFix('State the assumed `reliability = 0.5`', 'reliability = 0.5'), preferred: false },
+      ],
+    );
+    ke = ctx.result('ke', computed(1, 'ke = 1', '50 % reliability assumed: no reliability stated'), [], {
+      origin: 'default',
+      assumption: 'reliability not stated: 50 %, ke = 1',
+    });
+  }
+
+  const kmisc = ctx.has('kmisc')
+    ? ctx.input('kmisc')!
+    : ctx.result('kmisc', miscFactor(), [], {
+        origin: 'default',
+        assumption: 'no miscellaneous effects: kmisc = 1',
+      });
+
+  for (const [n, v] of [
+    ['ka', ka],
+    ['kb', kb],
+    ['kc', kc],
+    ['kd', kd],
+    ['ke', ke],
+    ['kmisc', kmisc],
+  ] as const) {
+    if (v !== null && (v <= 0 || v > 1.5))
+      ctx.diag(
+        'warning',
+        'absurd-value',
+        `${n} = ${v.toPrecision(3)} is outside any sensible Marin factor (0 to about 1)`,
+        ctx.rangeOf(n),
+      );
+  }
+
+  // Ultimate of the route and the base strength.
+  const Su = shear
+    ? (ctx.result(
+        'Ssu',
+        computed(0.67 * Sut, 'Ssu = 0.67 * Sut', "Budynas & Nisbett, Shigley's MED 10th ed., Eq. 6-54"),
+        ['Sut'],
+      ) ?? 0.67 * Sut)
+    : Sut;
+  let S: number | null = null;
+  let hasEndurance = st.enduranceLimit;
+  let N_ref = 1e6;
+  if (hasEndurance) {
+    const prime = ctx.has('Se_prime')
+      ? ctx.input('Se_prime')!
+      : ctx.result('Se_prime', rotatingBeamEndurance(st.cls, Sut), ['Sut'], { range: ctx.rangeOf('Sut') });
+    if (prime === null) hasEndurance = false;
+    else if (
+      ok &&
+      ka !== null &&
+      kb !== null &&
+      kc !== null &&
+      kd !== null &&
+      ke !== null &&
+      kmisc !== null
+    ) {
+      S = ctx.result(
+        'Se',
+        marinCorrected('Se', { ka, kb, kc, kd, ke, kmisc }, prime, 'Se_prime'),
+        ['ka', 'kb', 'kc', 'kd', 'ke', 'kmisc', 'Se_prime'],
+        { range: ctx.header },
+      );
+    }
+  }
+  if (!hasEndurance) {
+    const mat = st.material;
+    const base = ctx.input('Se_prime') ?? mat?.Sf_ref;
+    N_ref = mat?.N_ref ?? 5e8;
+    if (base === undefined) {
+      ctx.diag(
+        'error',
+        'missing-input',
+        'no reference fatigue strength for this material: state `Se_prime` (strength at the reference life)',
+      );
+    } else if (
+      ok &&
+      ka !== null &&
+      kb !== null &&
+      kc !== null &&
+      kd !== null &&
+      ke !== null &&
+      kmisc !== null
+    ) {
+      if (!ctx.has('Se_prime') && mat)
+        ctx.library(
+          'Sf_ref',
+          base,
+          `${mat.name}: rotating-beam fatigue strength at ${N_ref.toExponential(0)} cycles; ${mat.source}`,
+        );
+      S = ctx.result(
+        'S_ref',
+        marinCorrected('S_ref', { ka, kb, kc, kd, ke, kmisc }, base, 'Sf_ref'),
+        ['ka', 'kb', 'kc', 'kd', 'ke', 'kmisc', 'Sf_ref'],
+        {
+          dim: 'stress',
+          range: ctx.header,
+        },
+      );
+    }
+  }
+
+  // S-N line.
+  let line: SnLine | null = null;
+  const sfp = ctx.input('sigma_f_prime');
+  const bb = ctx.input('b_basquin');
+  if (sfp !== undefined && bb !== undefined) {
+    if (bb >= 0) ctx.diag('error', 'absurd-value', '`b_basquin` must be negative', ctx.rangeOf('b_basquin'));
+    else {
+      line = snLineFromBasquin(sfp, bb);
+      ctx.diag(
+        'information',
+        'basquin-as-stated',
+        "the stated Basquin constants are used as the part's S-N line: Marin factors do not act on them",
+        ctx.rangeOf('sigma_f_prime'),
+      );
+    }
+  } else if (S !== null) {
+    const f = ctx.has('f')
+      ? ctx.input('f')!
+      : ctx.result('f', fatigueStrengthFraction(Sut), ['Sut'], { range: ctx.rangeOf('Sut') });
+    if (f !== null) {
+      const c = snLineThrough(f * Su, S, 1e3, hasEndurance ? 1e6 : N_ref);
+      line = { ...c.line, hasKnee: hasEndurance };
+      if (c.notes) for (const n of c.notes) ctx.diag(n.severity ?? 'warning', n.code, n.message, ctx.header);
+    }
+  }
+  return { S, Su, hasEndurance, line, shear };
+}

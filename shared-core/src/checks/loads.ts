@@ -1,0 +1,396 @@
+/**
+ * Loads of a check and the nominal stresses they cause at the checked section: round
+ * shafts (solid-section formulas with `d`), plates with a hole (net section), and
+ * thin-walled shells (hoop and longitudinal membrane stresses).
+ */
+import { type Computed, computed } from '../computed';
+import type { CheckContext } from '../language/checkContext';
+import type { Range } from '../language/types';
+import {
+  axialStress,
+  bendingStress,
+  plateGrossStress,
+  plateNetStress,
+  shellStresses,
+  torsionStress,
+} from '../stress';
+
+export interface Component {
+  a: number;
+  m: number;
+}
+
+export type Geometry = 'round' | 'plate' | 'shell';
+
+export interface NominalStresses {
+  geometry: Geometry;
+  bending: Component;
+  axial: Component;
+  torsion: Component;
+  /** Shell membrane stresses (hoop and longitudinal), when `shell:` is given. */
+  shell?: { kind: 'cylinder' | 'sphere'; hoop: Component; long: Component };
+  /** Line that drives the stresses (for inline results). */
+  driver: Range;
+}
+
+type Base = 'M' | 'T' | 'F' | 'p';
+
+/** Amplitude and mean of a load from `X_max`/`X_min` or `X_a`/`X_m`. */
+export function readPair(ctx: CheckContext, base: Base): Component | undefined {
+  const maxN = `${base}_max`;
+  const minN = `${base}_min`;
+  const aN = `${base}_a`;
+  const mN = `${base}_m`;
+  const hasMaxMin = ctx.has(maxN) || ctx.has(minN);
+  const hasAM = base !== 'p' && (ctx.has(aN) || ctx.has(mN));
+  if (!hasMaxMin && !hasAM) return undefined;
+  if (hasMaxMin && hasAM) {
+    ctx.diag(
+      'error',
+      'load-twice',
+      `state the ${base} load either as \`${maxN}\`/\`${minN}\` or as \`${aN}\`/\`${mN}\`, not both`,
+      ctx.rangeOf(ctx.has(aN) ? aN : mN),
+    );
+    return undefined;
+  }
+  if (hasMaxMin) {
+    let max = ctx.input(maxN);
+    let min = ctx.input(minN);
+    if (max === undefined && min !== undefined) {
+      ctx.diag(
+        'error',
+        'missing-load-pair',
+        `\`${minN}\` is stated without \`${maxN}\`: state both`,
+        ctx.rangeOf(minN),
+      );
+      return undefined;
+    }
+    if (min === undefined) {
+      if (base === 'p') {
+        min = 0;
+        ctx.diag(
+          'information',
+          'defaulted-load',
+          '`p_min` not stated: the pressure is taken to fall to 0 each cycle',
+          ctx.rangeOf(maxN),
+          [ctx.insertFix('State `p_min = 0 MPa`', `p_min = 0 ${ctx.system === 'US' ? 'ksi' : 'MPa'}`)],
+        );
+      } else {
+        ctx.diag(
+          'error',
+          'missing-load-pair',
+          `\`${maxN}\` is stated without \`${minN}\`: state both (for a steady load, the same value twice)`,
+          ctx.rangeOf(maxN),
+        );
+        return undefined;
+      }
+    }
+    if (max === undefined) return undefined;
+    if (max < min) {
+      ctx.diag(
+        'warning',
+        'max-below-min',
+        `\`${maxN}\` is below \`${minN}\`: the two are swapped`,
+        ctx.rangeOf(maxN),
+      );
+      [max, min] = [min, max];
+    }
+    const dim = base === 'F' ? 'force' : base === 'p' ? 'stress' : 'moment';
+    const r = ctx.rangeOf(maxN);
+    const a = ctx.result(
+      aN,
+      computed((max - min) / 2, `${aN} = (${maxN} - ${minN}) / 2`, 'definition of the alternating component'),
+      [maxN, minN],
+      { dim, range: r, meaning: `${base} amplitude` },
+    );
+    const m = ctx.result(
+      mN,
+      computed((max + min) / 2, `${mN} = (${maxN} + ${minN}) / 2`, 'definition of the mean component'),
+      [maxN, minN],
+      { dim, range: r, meaning: `mean ${base}` },
+    );
+    return { a: Math.abs(a ?? 0), m: m ?? 0 };
+  }
+  const a = ctx.input(aN);
+  let m = ctx.input(mN);
+  if (a === undefined) {
+    ctx.diag(
+      'error',
+      'missing-load-pair',
+      `\`${mN}\` is stated without \`${aN}\`: state the amplitude too (0 for a steady load)`,
+      ctx.rangeOf(mN),
+    );
+    return undefined;
+  }
+  if (m === undefined) {
+    m = 0;
+    ctx.diag(
+      'information',
+      'defaulted-load',
+      `\`${mN}\` not stated: fully reversed loading (mean 0) assumed`,
+      ctx.rangeOf(aN),
+    );
+  }
+  return { a: Math.abs(a), m };
+}
+
+function readStressPair(ctx: CheckContext, aN: string, mN: string): Component | undefined {
+  if (!ctx.has(aN) && !ctx.has(mN)) return undefined;
+  const a = ctx.input(aN);
+  let m = ctx.input(mN);
+  if (a === undefined) {
+    ctx.diag(
+      'error',
+      'missing-load-pair',
+      `\`${mN}\` is stated without \`${aN}\`: state the amplitude too`,
+      ctx.rangeOf(mN),
+    );
+    return undefined;
+  }
+  if (m === undefined) {
+    m = 0;
+    ctx.diag('information', 'defaulted-load', `\`${mN}\` not stated: mean 0 assumed`, ctx.rangeOf(aN));
+  }
+  return { a: Math.abs(a), m };
+}
+
+const ZERO: Component = { a: 0, m: 0 };
+
+function need(ctx: CheckContext, name: string, why: string): number | undefined {
+  const v = ctx.input(name);
+  if (v === undefined) {
+    ctx.diag(
+      'error',
+      'missing-input',
+      `${why} needs \`${name}\` (${ctx.values[name]?.meaning ?? name}): state it`,
+    );
+    return undefined;
+  }
+  if (v <= 0) {
+    ctx.diag('error', 'absurd-value', `\`${name}\` must be positive`, ctx.rangeOf(name));
+    return undefined;
+  }
+  return v;
+}
+
+function stressOf(
+  ctx: CheckContext,
+  prefix: string,
+  pair: Component,
+  f: (load: number) => Computed,
+  loadBase: string,
+  range: Range,
+  inputs: string[],
+): Component {
+  const ca = f(pair.a);
+  const cm = f(pair.m);
+  const aName = `${prefix}_a`;
+  const mName = `${prefix}_m`;
+  const sub = (c: Computed, suffix: string) => ({
+    ...c,
+    formula: c.formula
+      .replace(/\b(M|T|F|p)\b/g, `${loadBase}_${suffix}`)
+      .replace(/^\s*\S+\s*=/, `${prefix}_${suffix} =`),
+  });
+  const a = ctx.result(aName, sub(ca, 'a'), [`${loadBase}_a`, ...inputs], { dim: 'stress', range });
+  const m = ctx.result(mName, sub(cm, 'm'), [`${loadBase}_m`, ...inputs], { dim: 'stress', range });
+  return { a: Math.abs(a ?? 0), m: m ?? 0 };
+}
+
+export function nominalStresses(ctx: CheckContext): NominalStresses | null {
+  const shellKind = ctx.option('shell') as 'cylinder' | 'sphere' | undefined;
+  const feature = ctx.option('feature');
+  const M = readPair(ctx, 'M');
+  const T = readPair(ctx, 'T');
+  const F = readPair(ctx, 'F');
+  const p = readPair(ctx, 'p');
+  const sB = readStressPair(ctx, 'sigma_a', 'sigma_m');
+  const sX = readStressPair(ctx, 'sigma_ax_a', 'sigma_ax_m');
+  const sT = readStressPair(ctx, 'tau_a', 'tau_m');
+  const driverName = [
+    'M_max',
+    'M_a',
+    'T_max',
+    'T_a',
+    'F_max',
+    'F_a',
+    'p_max',
+    'sigma_a',
+    'sigma_ax_a',
+    'tau_a',
+  ].find((n) => ctx.has(n));
+  const driver = driverName ? ctx.rangeOf(driverName) : ctx.header;
+  for (const [load, stress, ln, sn] of [
+    [M, sB, 'M', 'sigma_a'],
+    [T, sT, 'T', 'tau_a'],
+    [F, sX, 'F', 'sigma_ax_a'],
+  ] as const) {
+    if (load && stress) {
+      ctx.diag(
+        'error',
+        'load-twice',
+        `state either the ${ln} load or the nominal stress \`${sn}\`, not both`,
+        ctx.rangeOf(sn),
+      );
+      return null;
+    }
+  }
+  if (p && !shellKind) {
+    ctx.diag(
+      'error',
+      'missing-option',
+      'a pressure needs `shell: cylinder` or `shell: sphere`',
+      ctx.rangeOf('p_max'),
+    );
+    return null;
+  }
+
+  if (shellKind) {
+    if (!p) {
+      ctx.diag(
+        'error',
+        'missing-load',
+        'a shell check needs the pressure cycle: state `p_max` (and `p_min`)',
+        ctx.optionRange('shell'),
+      );
+      return null;
+    }
+    const D_i = need(ctx, 'D_i', 'a shell');
+    const t = need(ctx, 't', 'a shell');
+    if (D_i === undefined || t === undefined) return null;
+    const r = ctx.rangeOf('p_max');
+    const sa = shellStresses(shellKind, p.a, D_i, t);
+    const sm = shellStresses(shellKind, p.m, D_i, t);
+    const name = (c: Computed, sym: string) => ({
+      ...c,
+      formula: c.formula.replace(/^\s*\S+\s*=/, `${sym} =`),
+    });
+    const hoopA = ctx.result('sigma_hoop_a', name(sa.hoop, 'sigma_hoop_a'), ['p_a', 'D_i', 't'], {
+      dim: 'stress',
+      range: r,
+    });
+    const hoopM = ctx.result('sigma_hoop_m', name(sm.hoop, 'sigma_hoop_m'), ['p_m', 'D_i', 't'], {
+      dim: 'stress',
+      range: r,
+    });
+    const longA = ctx.result('sigma_long_a', name(sa.long, 'sigma_long_a'), ['p_a', 'D_i', 't'], {
+      dim: 'stress',
+      range: r,
+    });
+    const longM = ctx.result('sigma_long_m', name(sm.long, 'sigma_long_m'), ['p_m', 'D_i', 't'], {
+      dim: 'stress',
+      range: r,
+    });
+    if (M || T || F || sB || sT || sX)
+      ctx.diag(
+        'warning',
+        'ignored-input',
+        'a shell check uses the pressure only: the other loads are ignored',
+        driver,
+      );
+    return {
+      geometry: 'shell',
+      bending: ZERO,
+      axial: ZERO,
+      torsion: ZERO,
+      shell: {
+        kind: shellKind,
+        hoop: { a: Math.abs(hoopA ?? 0), m: hoopM ?? 0 },
+        long: { a: Math.abs(longA ?? 0), m: longM ?? 0 },
+      },
+      driver: r,
+    };
+  }
+
+  const plate = feature === 'plate-hole' || (!ctx.has('d') && ctx.has('W') && ctx.has('t'));
+  if (plate) {
+    if (M || T) {
+      ctx.diag(
+        'error',
+        'unsupported-load',
+        'a plate check takes an axial force; for bending or torsion of a plate state `sigma_a`/`sigma_m` or `tau_a`/`tau_m` directly',
+        ctx.rangeOf(M ? (ctx.has('M_max') ? 'M_max' : 'M_a') : ctx.has('T_max') ? 'T_max' : 'T_a'),
+      );
+      return null;
+    }
+    let axial = sX ?? ZERO;
+    if (F) {
+      const W = need(ctx, 'W', 'a plate');
+      const t = need(ctx, 't', 'a plate');
+      if (W === undefined || t === undefined) return null;
+      const r = ctx.rangeOf(ctx.has('F_max') ? 'F_max' : 'F_a');
+      if (feature === 'plate-hole') {
+        const dh = need(ctx, 'd_hole', 'a plate hole');
+        if (dh === undefined) return null;
+        if (dh >= W) {
+          ctx.diag(
+            'error',
+            'absurd-value',
+            '`d_hole` must be smaller than the plate width `W`',
+            ctx.rangeOf('d_hole'),
+          );
+          return null;
+        }
+        axial = stressOf(ctx, 'sigma_ax', F, (f) => plateNetStress(f, W, dh, t), 'F', r, [
+          'W',
+          'd_hole',
+          't',
+        ]);
+      } else {
+        axial = stressOf(ctx, 'sigma_ax', F, (f) => plateGrossStress(f, W, t), 'F', r, ['W', 't']);
+      }
+    }
+    return { geometry: 'plate', bending: sB ?? ZERO, axial, torsion: sT ?? ZERO, driver };
+  }
+
+  let bending = sB ?? ZERO;
+  let torsion = sT ?? ZERO;
+  let axial = sX ?? ZERO;
+  if (M || T || F) {
+    const d = need(ctx, 'd', 'a load on a round section');
+    if (d === undefined) return null;
+    if (M)
+      bending = stressOf(
+        ctx,
+        'sigma',
+        M,
+        (m) => bendingStress(m, d),
+        'M',
+        ctx.rangeOf(ctx.has('M_max') ? 'M_max' : 'M_a'),
+        ['d'],
+      );
+    if (T)
+      torsion = stressOf(
+        ctx,
+        'tau',
+        T,
+        (x) => torsionStress(x, d),
+        'T',
+        ctx.rangeOf(ctx.has('T_max') ? 'T_max' : 'T_a'),
+        ['d'],
+      );
+    if (F)
+      axial = stressOf(
+        ctx,
+        'sigma_ax',
+        F,
+        (x) => axialStress(x, d),
+        'F',
+        ctx.rangeOf(ctx.has('F_max') ? 'F_max' : 'F_a'),
+        ['d'],
+      );
+  }
+  if (!M && !T && !F && !sB && !sT && !sX) {
+    ctx.diag(
+      'error',
+      'missing-load',
+      'no load: state `M_max`/`M_min`, `T_max`/`T_min`, `F_max`/`F_min` (or their `_a`/`_m` forms), nominal stresses `sigma_a`/`sigma_m`, or a shell pressure',
+    );
+    return null;
+  }
+  return { geometry: 'round', bending, axial, torsion, driver };
+}
+
+export function active(c: Component): boolean {
+  return c.a !== 0 || c.m !== 0;
+}

@@ -1,0 +1,252 @@
+/**
+ * The state of one check while it is evaluated: its stated inputs, its options, the values
+ * it has derived so far (each with its derivation), and its diagnostics. The methods in
+ * `checks/` read inputs and record results only through this object, so that every number
+ * is computed once and carries its formula, inputs and source.
+ */
+import type { Computed } from '../computed';
+import { DIM_LABEL, type DimKey } from '../units/dimensions';
+import { formatCycles, formatValue, type UnitSystem } from '../units/format';
+import type { Quantity } from './expressions';
+import type { AssignStatement, OptionStatement, SpectrumStatement } from './statements';
+import type { Diagnostic, QuickFix, Range, Severity, Value, ValueOrigin } from './types';
+import { nameInfo, OPTIONS } from './vocabulary';
+
+export interface StatedInput {
+  q: Quantity;
+  stmt: AssignStatement;
+}
+
+export interface HistoryChunkReader {
+  /** Calls `onChunk` with the file's text in order; returns an error text instead when it cannot. */
+  read(
+    relativePath: string,
+    onChunk: (chunk: string) => void,
+  ): { ok: true } | { ok: false; code: string; message: string };
+}
+
+export class CheckContext {
+  readonly values: Record<string, Value> = {};
+  readonly order: string[] = [];
+  readonly diagnostics: Diagnostic[] = [];
+  readonly used = new Set<string>();
+  spectrum: SpectrumStatement[] = [];
+
+  constructor(
+    readonly id: string | null,
+    readonly header: Range,
+    readonly insertLine: number,
+    readonly stated: Map<string, StatedInput>,
+    readonly options: Map<string, OptionStatement>,
+    readonly system: UnitSystem,
+    readonly digits: number,
+    readonly histories?: HistoryChunkReader,
+  ) {}
+
+  /** A validated option word, or undefined when absent (or invalid: already diagnosed). */
+  option(key: string): string | undefined {
+    const o = this.options.get(key);
+    if (!o) return undefined;
+    const allowed = OPTIONS[key]?.values;
+    if (allowed && !(o.value.text in allowed)) return undefined;
+    return o.value.text;
+  }
+
+  optionRange(key: string): Range | undefined {
+    return this.options.get(key)?.whole;
+  }
+
+  /** SI value of a stated input (undefined when not stated or stated wrongly). */
+  input(name: string): number | undefined {
+    const s = this.stated.get(name);
+    if (!s) return undefined;
+    this.used.add(name);
+    return s.q.si;
+  }
+
+  has(name: string): boolean {
+    return this.stated.has(name);
+  }
+
+  rangeOf(name: string): Range {
+    return this.stated.get(name)?.stmt.whole ?? this.values[name]?.range ?? this.header;
+  }
+
+  diag(severity: Severity, code: string, message: string, range?: Range, fixes?: QuickFix[]): void {
+    const d: Diagnostic = { range: range ?? this.header, severity, code, message, check: this.id };
+    if (fixes && fixes.length > 0) d.fixes = fixes;
+    // One diagnostic per code and place.
+    if (
+      this.diagnostics.some(
+        (x) =>
+          x.code === code &&
+          x.range.start.line === d.range.start.line &&
+          x.range.start.character === d.range.start.character,
+      )
+    )
+      return;
+    this.diagnostics.push(d);
+  }
+
+  /** A quick fix that inserts a statement as the block's last line. */
+  insertFix(title: string, statement: string): QuickFix {
+    return {
+      title,
+      edits: [
+        {
+          range: {
+            start: { line: this.insertLine, character: 0 },
+            end: { line: this.insertLine, character: 0 },
+          },
+          newText: `${statement}\n`,
+        },
+      ],
+      preferred: true,
+    };
+  }
+
+  display(si: number | null, dim: DimKey, infinite = false): string {
+    if (infinite || si === null) return 'infinite';
+    if (dim === 'one' && Math.abs(si) >= 1e3 && Number.isInteger(Math.round(si))) return formatCycles(si);
+    return formatValue(si, dim, this.system, this.digits);
+  }
+
+  private dimOf(name: string, fallback: DimKey): DimKey {
+    return nameInfo(name)?.dim ?? fallback;
+  }
+
+  private put(v: Value): void {
+    if (!(v.name in this.values)) this.order.push(v.name);
+    this.values[v.name] = v;
+  }
+
+  /** Record a stated input as a value (done by the evaluator for every assignment). */
+  recordStated(name: string, q: Quantity, stmt: AssignStatement, dim: DimKey): void {
+    this.put({
+      name,
+      dim,
+      si: q.si,
+      display: this.display(q.si, dim),
+      origin: 'stated',
+      meaning: nameInfo(name)?.meaning ?? 'quantity of the note',
+      range: stmt.whole,
+      expression: stmt.expr.text,
+    });
+  }
+
+  inputsOf(names: string[]): Array<{ name: string; display: string }> {
+    const out: Array<{ name: string; display: string }> = [];
+    for (const n of names) {
+      const v = this.values[n];
+      if (v) out.push({ name: n, display: v.display });
+    }
+    return out;
+  }
+
+  /**
+   * Record a computed quantity. When the note states it, the stated value wins and the tool's
+   * own result is kept beside it; returns the value to use downstream (null when infinite).
+   */
+  result(
+    name: string,
+    c: Computed | null,
+    inputs: string[],
+    opts: { dim?: DimKey; range?: Range; origin?: ValueOrigin; assumption?: string; meaning?: string } = {},
+  ): number | null {
+    const dim = opts.dim ?? this.dimOf(name, 'one');
+    const stated = this.stated.get(name);
+    const notes: string[] = [];
+    if (c?.notes)
+      for (const n of c.notes) {
+        const sev = n.severity ?? 'warning';
+        if (sev === 'information' || sev === 'hint') notes.push(n.message);
+        else this.diag(sev, n.code, `${name}: ${n.message}`, opts.range ?? this.rangeOf(name));
+      }
+    if (stated) {
+      this.used.add(name);
+      const v = this.values[name];
+      if (v && c) {
+        v.tool = {
+          si: c.infinite ? null : c.value,
+          ...(c.infinite ? { infinite: true } : {}),
+          display: this.display(c.value, dim, c.infinite),
+          formula: c.formula,
+          source: c.source,
+        };
+      }
+      return stated.q.si;
+    }
+    if (!c) return null;
+    if (!Number.isFinite(c.value)) {
+      this.diag(
+        'error',
+        'non-finite',
+        `${name} could not be computed from these inputs (not a finite number)`,
+        opts.range,
+      );
+      return null;
+    }
+    const v: Value = {
+      name,
+      dim,
+      si: c.infinite ? null : c.value,
+      display: this.display(c.value, dim, c.infinite),
+      origin: opts.origin ?? 'computed',
+      meaning: opts.meaning ?? nameInfo(name)?.meaning ?? name,
+      formula: renameFormula(c.formula, name),
+      inputs: this.inputsOf(inputs),
+      source: c.source,
+    };
+    if (c.infinite) v.infinite = true;
+    if (c.terms) v.terms = c.terms;
+    if (notes.length > 0) v.notes = notes;
+    if (opts.range) v.range = opts.range;
+    if (opts.assumption) v.assumption = opts.assumption;
+    this.put(v);
+    return c.infinite ? null : c.value;
+  }
+
+  /** A value taken from a library (material) rather than computed. */
+  library(name: string, si: number, source: string, range?: Range): number {
+    const stated = this.stated.get(name);
+    if (stated) {
+      this.used.add(name);
+      return stated.q.si;
+    }
+    const dim = this.dimOf(name, 'one');
+    this.put({
+      name,
+      dim,
+      si,
+      display: this.display(si, dim),
+      origin: 'library',
+      meaning: nameInfo(name)?.meaning ?? name,
+      source,
+      ...(range ? { range } : {}),
+    });
+    return si;
+  }
+
+  /** Whether a value is available (stated or already derived). */
+  known(name: string): boolean {
+    return this.stated.has(name) || name in this.values;
+  }
+
+  si(name: string): number | undefined {
+    const s = this.stated.get(name);
+    if (s) return s.q.si;
+    const v = this.values[name];
+    return v && v.si !== null ? v.si : undefined;
+  }
+
+  dimLabel(dim: DimKey): string {
+    return DIM_LABEL[dim];
+  }
+}
+
+/** A method's formula names its own symbol (`n_f = ...`); the record shows the value's name. */
+function renameFormula(formula: string, name: string): string {
+  const m = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s*=(?!=)/.exec(formula);
+  if (!m || m[1] === name) return formula;
+  return `${name} =${formula.slice(m[0].length)}`;
+}

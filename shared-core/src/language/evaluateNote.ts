@@ -1,0 +1,332 @@
+/**
+ * Evaluates every fatigue block of a note, top to bottom: reads the statements, checks
+ * names, units and options, runs the check's method, then its requirements. Never throws:
+ * whatever goes wrong inside one check becomes a diagnostic of that check.
+ */
+import { runCheckMethod } from '../checks/runMethod';
+import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
+import type { UnitSystem } from '../units/format';
+import type { Unit } from '../units/mathInstance';
+import { CheckContext, type HistoryChunkReader, type StatedInput } from './checkContext';
+import { ExpressionError, evaluateExpression, type Quantity, rawFromSI, type Scope } from './expressions';
+import { type BlockSource, findFatigueBlocks, ID_PATTERN, splitLines } from './markdownBlocks';
+import { evaluateRequirements } from './requirements';
+import { type AssignStatement, type OptionStatement, parseStatements, type Statement } from './statements';
+import { type CheckResult, type Diagnostic, lineRange, type Method, type NoteResult, range } from './types';
+import { detectUnitSystem, unitFixes } from './unitSystem';
+import { INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from './vocabulary';
+
+export interface EvaluateOptions {
+  /** Display units; 'auto' follows the units the note is written in. */
+  unitSystem?: UnitSystem | 'auto';
+  significantDigits?: number;
+  /** Reads history files for `method: damage`; without it such checks say the file cannot be read here. */
+  histories?: HistoryChunkReader;
+  /** Per-lint switches by diagnostic code (false turns a lint off). */
+  lints?: Record<string, boolean>;
+}
+
+/** Raw mathjs values of a finished check, for `check.name` references in later checks. */
+export interface CheckScopeEntry {
+  result: CheckResult;
+  raw: Map<string, Unit | number>;
+}
+
+export function evaluateNote(text: string, options: EvaluateOptions = {}): NoteResult {
+  const lines = splitLines(text);
+  const blocks = findFatigueBlocks(text, lines);
+  const noteSystem = options.unitSystem && options.unitSystem !== 'auto' ? options.unitSystem : undefined;
+  const previous = new Map<string, CheckScopeEntry>();
+  const checks: CheckResult[] = [];
+  const seenIds = new Map<string, BlockSource>();
+  for (const block of blocks) {
+    const entry = evaluateBlock(block, previous, seenIds, { ...options, unitSystem: noteSystem ?? 'auto' });
+    checks.push(entry.result);
+    if (entry.result.id && !previous.has(entry.result.id)) previous.set(entry.result.id, entry);
+  }
+  const diagnostics: Diagnostic[] = [];
+  for (const c of checks) diagnostics.push(...c.diagnostics);
+  if (options.lints) {
+    const off = options.lints;
+    for (const c of checks) c.diagnostics = c.diagnostics.filter((d) => off[d.code] !== false);
+    return { checks, diagnostics: diagnostics.filter((d) => off[d.code] !== false) };
+  }
+  return { checks, diagnostics };
+}
+
+export function evaluateBlock(
+  block: BlockSource,
+  previous: ReadonlyMap<string, CheckScopeEntry>,
+  seenIds: Map<string, BlockSource>,
+  options: EvaluateOptions,
+): CheckScopeEntry {
+  const header = lineRange(block.openLine, block.idStart, block.idEnd);
+  const id = block.id && ID_PATTERN.test(block.id) ? block.id : null;
+  const statements = parseStatements(block.lines, /^\s*>/.test(block.lines[0]?.text ?? ''));
+  const system: UnitSystem =
+    options.unitSystem && options.unitSystem !== 'auto' ? options.unitSystem : detectUnitSystem(statements);
+  const stated = new Map<string, StatedInput>();
+  const optionMap = new Map<string, OptionStatement>();
+  const ctx = new CheckContext(
+    id,
+    header,
+    block.closed ? block.closeLine : block.closeLine + 1,
+    stated,
+    optionMap,
+    system,
+    options.significantDigits ?? 4,
+    options.histories,
+  );
+  const raw = new Map<string, Unit | number>();
+  const result: CheckResult = {
+    id,
+    method: 'stress-life',
+    range: range(block.openLine, 0, block.closeLine, 0),
+    headerRange: header,
+    insertLine: ctx.insertLine,
+    status: 'error',
+    values: ctx.values,
+    order: ctx.order,
+    requirements: [],
+    diagnostics: ctx.diagnostics,
+    unitSystem: system,
+  };
+  try {
+    checkHeader(ctx, block, seenIds);
+    const scope = blockScope(raw, previous);
+    readStatements(ctx, statements, scope, raw);
+    const title = optionMap.get('title')?.value.text;
+    if (title) result.title = title;
+    result.method = (ctx.option('method') as Method | undefined) ?? 'stress-life';
+    result.criterion = ctx.option('criterion');
+    const extras = runCheckMethod(result.method, ctx);
+    if (extras.haigh) result.haigh = extras.haigh;
+    if (extras.sn) result.sn = extras.sn;
+    if (extras.tables) result.tables = extras.tables;
+    if (extras.crackCurve) result.crackCurve = extras.crackCurve;
+    if (extras.histogram) result.histogram = extras.histogram;
+    if (extras.criterion) result.criterion = extras.criterion;
+    for (const name of ctx.order) {
+      const v = ctx.values[name];
+      if (!raw.has(name) && v.si !== null) {
+        const vec = vectorOf(v.dim);
+        if (vec) raw.set(name, rawFromSI(v.si, vec));
+      }
+    }
+    const requireStatements = statements.filter((s) => s.kind === 'require');
+    const hasErrors = ctx.diagnostics.some((d) => d.severity === 'error');
+    result.requirements = evaluateRequirements(ctx, requireStatements, scope);
+    if (hasErrors) result.status = 'error';
+    else if (result.requirements.length === 0) result.status = 'unchecked';
+    else if (result.requirements.some((r) => r.met === null)) result.status = 'error';
+    else result.status = result.requirements.every((r) => r.met) ? 'pass' : 'fail';
+  } catch (e) {
+    // A bug in a method must not take the note down: report it on the block.
+    const msg = e instanceof Error ? e.message : String(e);
+    ctx.diag(
+      'error',
+      'internal',
+      `the check could not be evaluated (internal error: ${msg}); please report it`,
+    );
+    result.status = 'error';
+  }
+  return { result, raw };
+}
+
+function checkHeader(ctx: CheckContext, block: BlockSource, seenIds: Map<string, BlockSource>): void {
+  if (!block.id) {
+    ctx.diag(
+      'warning',
+      'missing-id',
+      'this check has no id: write one after `fatigue` (e.g. ```fatigue drive_shaft) so that reports and other checks can name it',
+    );
+  } else if (!ID_PATTERN.test(block.id)) {
+    ctx.diag(
+      'error',
+      'bad-id',
+      `\`${block.id}\` is not a valid check id: use a letter or _ then letters, digits or _`,
+    );
+  } else {
+    const prior = seenIds.get(block.id);
+    if (prior)
+      ctx.diag(
+        'error',
+        'duplicate-id',
+        `a check named \`${block.id}\` already exists on line ${prior.openLine + 1}: ids must be unique in a note`,
+      );
+    else seenIds.set(block.id, block);
+  }
+  if (block.extraInfo)
+    ctx.diag(
+      'warning',
+      'extra-info',
+      `\`${block.extraInfo}\` after the id is ignored: put the title on a \`title:\` line`,
+      lineRange(block.openLine, block.idEnd, block.openLineLength),
+    );
+  if (!block.closed)
+    ctx.diag(
+      'error',
+      'unclosed-block',
+      'this block has no closing fence: everything to the end of the note is read as part of it',
+    );
+}
+
+function blockScope(raw: Map<string, Unit | number>, previous: ReadonlyMap<string, CheckScopeEntry>): Scope {
+  return {
+    get: (name) => raw.get(name),
+    hasCheck: (check) => previous.has(check),
+    member: (check, member) => previous.get(check)?.raw.get(member),
+  };
+}
+
+function readStatements(
+  ctx: CheckContext,
+  statements: Statement[],
+  scope: Scope,
+  raw: Map<string, Unit | number>,
+): void {
+  const lineOfName = new Map<string, number>();
+  for (const s of statements) {
+    switch (s.kind) {
+      case 'bad':
+        ctx.diag('error', s.code, s.message, s.range);
+        break;
+      case 'option':
+        readOption(ctx, s);
+        break;
+      case 'assign':
+        readAssign(ctx, s, scope, raw, lineOfName);
+        break;
+      case 'spectrum':
+        ctx.spectrum.push(s);
+        break;
+      default:
+        break;
+    }
+  }
+}
+
+function readOption(ctx: CheckContext, s: OptionStatement): void {
+  const key = s.key.text;
+  const info = OPTIONS[key];
+  if (!info) {
+    const near = nearest(key, Object.keys(OPTIONS), 2);
+    const asName = key in INPUT_NAMES ? ` (\`${key}\` is a quantity: write \`${key} = ...\`)` : '';
+    ctx.diag(
+      'error',
+      'unknown-option',
+      `unknown option \`${key}:\`${near ? `: did you mean \`${near}:\`?` : ''}${asName}`,
+      s.key.range,
+      near
+        ? [
+            {
+              title: `Change to \`${near}:\``,
+              edits: [{ range: s.key.range, newText: near }],
+              preferred: true,
+            },
+          ]
+        : [],
+    );
+    return;
+  }
+  if (ctx.options.has(key)) {
+    ctx.diag(
+      'error',
+      'duplicate-option',
+      `\`${key}:\` is already given on line ${ctx.options.get(key)!.line + 1}`,
+      s.whole,
+    );
+    return;
+  }
+  ctx.options.set(key, s);
+  if (info.values && !(s.value.text in info.values)) {
+    const choices = Object.keys(info.values);
+    const near = nearest(s.value.text, choices, 3);
+    ctx.diag(
+      'error',
+      'unknown-option-value',
+      `\`${s.value.text}\` is not a value of \`${key}:\`${near ? `: did you mean \`${near}\`?` : ''} (one of ${choices.join(', ')})`,
+      s.value.range,
+      near
+        ? [
+            {
+              title: `Change to \`${near}\``,
+              edits: [{ range: s.value.range, newText: near }],
+              preferred: true,
+            },
+          ]
+        : [],
+    );
+  }
+}
+
+function readAssign(
+  ctx: CheckContext,
+  s: AssignStatement,
+  scope: Scope,
+  raw: Map<string, Unit | number>,
+  lineOfName: Map<string, number>,
+): void {
+  const name = s.name.text;
+  const prior = lineOfName.get(name);
+  if (prior !== undefined) {
+    ctx.diag(
+      'error',
+      'duplicate-name',
+      `\`${name}\` is already stated on line ${prior + 1} of this note`,
+      s.name.range,
+    );
+    return;
+  }
+  lineOfName.set(name, s.line);
+  if (name in RESULT_NAMES && !(name in INPUT_NAMES) && !['Se', 'Kfm', 'Kfsm', 'Kf_axm'].includes(name)) {
+    ctx.diag(
+      'information',
+      'result-stated',
+      `\`${name}\` is a result of the check: the stated value replaces the computed one (both are shown)`,
+      s.name.range,
+    );
+  }
+  let q: Quantity;
+  try {
+    q = evaluateExpression(s.expr.text, scope);
+  } catch (e) {
+    const err = e instanceof ExpressionError ? e : new ExpressionError('expression-error', String(e));
+    const start = s.expr.range.start.character + (err.offset ?? 0);
+    const r =
+      err.offset !== undefined
+        ? lineRange(s.line, start, Math.min(start + (err.length ?? 1), s.expr.range.end.character))
+        : s.expr.range;
+    ctx.diag('error', err.code, `${name}: ${err.message}`, r);
+    return;
+  }
+  const info = INPUT_NAMES[name] ?? RESULT_NAMES[name];
+  let dim: DimKey = classify(q.dim);
+  if (info && info.dim !== 'other') {
+    const want = info.dim === 'paris' ? vectorOf('one')! : vectorOf(info.dim)!;
+    if (!sameVector(q.dim, want)) {
+      const noUnit = q.dim.every((x) => x === 0);
+      if (noUnit) {
+        ctx.diag(
+          'error',
+          'missing-unit',
+          `\`${name}\` needs a unit: it is ${ctx.dimLabel(info.dim)}`,
+          s.expr.range,
+          unitFixes(info.dim, ctx.system, s.expr),
+        );
+      } else {
+        ctx.diag(
+          'error',
+          'wrong-dimension',
+          `\`${name}\` must be ${ctx.dimLabel(info.dim)}, but \`${s.expr.text}\` is ${ctx.dimLabel(dim)}`,
+          s.expr.range,
+        );
+      }
+      return;
+    }
+    dim = info.dim === 'paris' ? 'one' : info.dim;
+  }
+  raw.set(name, q.raw);
+  ctx.stated.set(name, { q, stmt: s });
+  ctx.recordStated(name, q, s, dim);
+}

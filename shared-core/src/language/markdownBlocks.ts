@@ -1,0 +1,103 @@
+/**
+ * Finds the fatigue blocks of a Markdown note: fenced code blocks whose info string is
+ * `fatigue` followed by the check's id. Markdown is parsed by unified + remark-parse, so a
+ * fence inside a list, a block quote or an HTML comment is treated exactly as CommonMark
+ * says; the block's own lines are then read from the source text to keep exact columns.
+ */
+import type { Code, Root, RootContent } from 'mdast';
+import remarkParse from 'remark-parse';
+import { unified } from 'unified';
+
+export const ID_PATTERN = /^[A-Za-z_][A-Za-z0-9_]*$/;
+
+export interface SourceLine {
+  /** 0-based line in the document. */
+  line: number;
+  text: string;
+}
+
+export interface BlockSource {
+  /** The id text as written (may be invalid), or null when the info string has none. */
+  id: string | null;
+  /** Everything after `fatigue` in the info string beyond the id, for a diagnostic. */
+  extraInfo: string;
+  /** 0-based line of the opening fence. */
+  openLine: number;
+  /** 0-based line of the closing fence, or the last line of the block when it is not closed. */
+  closeLine: number;
+  closed: boolean;
+  /** Character range of the id (or of the info string) on the opening line. */
+  idStart: number;
+  idEnd: number;
+  /** Length of the opening fence line. */
+  openLineLength: number;
+  /** Content lines, with their document line numbers. */
+  lines: SourceLine[];
+}
+
+const parser = unified().use(remarkParse);
+
+/** Split into lines the way LSP counts them (\n, \r\n and \r end a line). */
+export function splitLines(text: string): string[] {
+  return text.split(/\r\n|\r|\n/);
+}
+
+export function findFatigueBlocks(text: string, lines: string[] = splitLines(text)): BlockSource[] {
+  let tree: Root;
+  try {
+    tree = parser.parse(text) as Root;
+  } catch {
+    return [];
+  }
+  const out: BlockSource[] = [];
+  const visit = (node: Root | RootContent): void => {
+    if (node.type === 'code') {
+      const b = fromCode(node, lines);
+      if (b) out.push(b);
+      return;
+    }
+    if ('children' in node) for (const c of node.children as RootContent[]) visit(c);
+  };
+  visit(tree);
+  return out;
+}
+
+function fromCode(node: Code, lines: string[]): BlockSource | null {
+  if (node.lang !== 'fatigue' || !node.position) return null;
+  const openLine = node.position.start.line - 1;
+  const lastLine = node.position.end.line - 1;
+  const opening = lines[openLine] ?? '';
+  const fence = /^(\s*(?:>\s*)*)(`{3,}|~{3,})/.exec(opening);
+  // An indented code block whose first word is `fatigue` is not a fence.
+  if (!fence) return null;
+  const fenceChars = fence[2];
+  const closingRe = new RegExp(`^\\s*(?:>\\s*)*${fenceChars[0]}{${fenceChars.length},}\\s*$`);
+  const closed = lastLine > openLine && closingRe.test(lines[lastLine] ?? '');
+  const contentEnd = closed ? lastLine - 1 : lastLine;
+  const meta = (node.meta ?? '').trim();
+  const words = meta === '' ? [] : meta.split(/\s+/);
+  const id = words[0] ?? null;
+  const infoStart = opening.indexOf('fatigue', fence[0].length) + 'fatigue'.length;
+  let idStart = infoStart;
+  let idEnd = opening.length;
+  if (id) {
+    idStart = opening.indexOf(id, infoStart);
+    idEnd = idStart + id.length;
+  } else {
+    idStart = Math.max(0, opening.indexOf('fatigue'));
+    idEnd = idStart + 'fatigue'.length;
+  }
+  const contentLines: SourceLine[] = [];
+  for (let l = openLine + 1; l <= contentEnd; l++) contentLines.push({ line: l, text: lines[l] ?? '' });
+  return {
+    id,
+    extraInfo: words.slice(1).join(' '),
+    openLine,
+    closeLine: lastLine,
+    closed,
+    idStart,
+    idEnd,
+    openLineLength: opening.length,
+    lines: contentLines,
+  };
+}

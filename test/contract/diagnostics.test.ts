@@ -1,0 +1,74 @@
+/** Each mistake of test/fixtures/mistakes.md gets its diagnostic, with its code, on its line. */
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { evaluateNote } from '../../shared-core/src';
+
+const text = readFileSync(new URL('../fixtures/mistakes.md', import.meta.url), 'utf8');
+const lines = text.split('\n');
+const result = evaluateNote(text);
+
+/** 0-based line of the first line that starts with `prefix` (after a given line). */
+function lineOf(prefix: string, after = 0): number {
+  const i = lines.findIndex((l, k) => k >= after && l.startsWith(prefix));
+  if (i < 0) throw new Error(`no line ${prefix}`);
+  return i;
+}
+
+function has(code: string, line: number, severity?: string) {
+  const found = result.diagnostics.filter((d) => d.code === code && d.range.start.line === line);
+  expect(
+    found,
+    `${code} on line ${line + 1}; got ${result.diagnostics.map((d) => `${d.range.start.line + 1}:${d.code}`).join(' ')}`,
+  ).not.toHaveLength(0);
+  if (severity) expect(found[0].severity).toBe(severity);
+  return found[0];
+}
+
+describe('diagnostics of a note with mistakes', () => {
+  it('wrong dimension on the Sut line', () => has('wrong-dimension', lineOf('Sut = 630 mm'), 'error'));
+  it('misspelt option value, with the nearest word as a quick fix', () => {
+    const d = has('unknown-option-value', lineOf('surface: machinned'), 'error');
+    expect(d.message).toContain('machined');
+    expect(d.fixes?.[0].edits[0].newText).toBe('machined');
+    expect(d.range.start.character).toBe('surface: '.length);
+  });
+  it('missing unit, with unit quick fixes', () => {
+    const d = has('missing-unit', lineOf('d = 35'), 'error');
+    expect(d.fixes?.map((f) => f.edits[0].newText)).toContain(' mm');
+  });
+  it('name stated twice: error on the second line', () =>
+    has('duplicate-name', lineOf('Sy = 500 MPa'), 'error'));
+  it('unknown option key with a suggestion', () => {
+    const d = has('unknown-option', lineOf('criteria: goodman'), 'error');
+    expect(d.message).toContain('criterion');
+  });
+  it('name used before it is defined', () => has('unknown-name', lineOf('x = y + 2 mm'), 'error'));
+  it('a check without an id: warning on the fence', () =>
+    has(
+      'missing-id',
+      lines.findIndex((l) => l.trim() === '```fatigue'),
+      'warning',
+    ));
+  it('Sy above Sut', () => has('sy-above-sut', lineOf('Sy = 700 MPa'), 'warning'));
+  it('defaulted temperature and reliability are flagged as assumptions', () => {
+    const fence = lineOf('```fatigue', lineOf('Sy = 700 MPa') - 3);
+    has('defaulted-temperature', fence, 'warning');
+    has('defaulted-reliability', fence, 'warning');
+    has('no-criterion', fence, 'warning');
+  });
+  it('two checks with one id: error', () => has('duplicate-id', lineOf('```fatigue shaft_a', 5), 'error'));
+  it('no endurance limit and no N: error on the material line', () =>
+    has('no-endurance-limit', lineOf('material: al-6061-t6'), 'error'));
+  it('unknown reference', () => has('unknown-reference', lineOf('z = other_check.d'), 'error'));
+  it('every diagnostic range lies inside its block', () => {
+    for (const c of result.checks)
+      for (const d of c.diagnostics) {
+        expect(d.range.start.line).toBeGreaterThanOrEqual(c.range.start.line);
+        expect(d.range.end.line).toBeLessThanOrEqual(c.range.end.line + 1);
+        expect(d.range.start.character).toBeGreaterThanOrEqual(0);
+      }
+  });
+  it('statuses: errors make a check an error; warnings alone do not', () => {
+    expect(result.checks.map((c) => c.status)).toEqual(['error', 'pass', 'error']);
+  });
+});
