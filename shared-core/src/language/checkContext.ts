@@ -7,7 +7,7 @@
 import type { Computed } from '../computed';
 import { DIM_LABEL, type DimKey } from '../units/dimensions';
 import { formatCycles, formatValue, type UnitSystem } from '../units/format';
-import type { Quantity } from './expressions';
+import type { Quantity, Scope } from './expressions';
 import type { AssignStatement, OptionStatement, SpectrumStatement } from './statements';
 import type { Diagnostic, QuickFix, Range, Severity, Value, ValueOrigin } from './types';
 import { nameInfo, OPTIONS } from './vocabulary';
@@ -31,6 +31,8 @@ export class CheckContext {
   readonly diagnostics: Diagnostic[] = [];
   readonly used = new Set<string>();
   spectrum: SpectrumStatement[] = [];
+  /** Names of the block and `check.name` references, for expressions a method evaluates itself (spectrum levels). */
+  scope?: Scope;
 
   constructor(
     readonly id: string | null,

@@ -4,6 +4,7 @@
  * whatever goes wrong inside one check becomes a diagnostic of that check.
  */
 import { runCheckMethod } from '../checks/runMethod';
+import { solveBlock } from '../design/solve';
 import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import type { UnitSystem } from '../units/format';
 import type { Unit } from '../units/mathInstance';
@@ -14,7 +15,7 @@ import { evaluateRequirements } from './requirements';
 import { type AssignStatement, type OptionStatement, parseStatements, type Statement } from './statements';
 import { type CheckResult, type Diagnostic, lineRange, type Method, type NoteResult, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
-import { INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from './vocabulary';
+import { INPUT_NAMES, MAGNITUDE, nearest, OPTIONS, POSITIVE, RESULT_NAMES } from './vocabulary';
 
 export interface EvaluateOptions {
   /** Display units; 'auto' follows the units the note is written in. */
@@ -40,7 +41,11 @@ export function evaluateNote(text: string, options: EvaluateOptions = {}): NoteR
   const checks: CheckResult[] = [];
   const seenIds = new Map<string, BlockSource>();
   for (const block of blocks) {
-    const entry = evaluateBlock(block, previous, seenIds, { ...options, unitSystem: noteSystem ?? 'auto' });
+    const blockOptions: EvaluateOptions = { ...options, unitSystem: noteSystem ?? 'auto' };
+    // Design mode (`solve:`) evaluates the block again per trial value; trials leave `seenIds` alone.
+    const entry = solveBlock(block, previous, (inject, trial) =>
+      evaluateBlock(block, previous, trial ? new Map(seenIds) : seenIds, blockOptions, inject),
+    );
     checks.push(entry.result);
     if (entry.result.id && !previous.has(entry.result.id)) previous.set(entry.result.id, entry);
   }
@@ -59,6 +64,8 @@ export function evaluateBlock(
   previous: ReadonlyMap<string, CheckScopeEntry>,
   seenIds: Map<string, BlockSource>,
   options: EvaluateOptions,
+  /** Inputs set as if stated before the first line (design mode's trial values). */
+  inject?: ReadonlyMap<string, StatedInput>,
 ): CheckScopeEntry {
   const header = lineRange(block.openLine, block.idStart, block.idEnd);
   const id = block.id && ID_PATTERN.test(block.id) ? block.id : null;
@@ -94,6 +101,12 @@ export function evaluateBlock(
   try {
     checkHeader(ctx, block, seenIds);
     const scope = blockScope(raw, previous);
+    ctx.scope = scope;
+    for (const [name, input] of inject ?? []) {
+      raw.set(name, input.q.raw);
+      stated.set(name, input);
+      ctx.recordStated(name, input.q, input.stmt, classify(input.q.dim));
+    }
     readStatements(ctx, statements, scope, raw);
     const title = optionMap.get('title')?.value.text;
     if (title) result.title = title;
@@ -325,8 +338,25 @@ function readAssign(
       return;
     }
     dim = info.dim === 'paris' ? 'one' : info.dim;
+    const bad = implausible(name, q.si, dim);
+    if (bad) {
+      ctx.diag('error', 'absurd-value', `\`${name}\` ${bad}`, s.expr.range);
+      return;
+    }
   }
   raw.set(name, q.raw);
   ctx.stated.set(name, { q, stmt: s });
   ctx.recordStated(name, q, s, dim);
+}
+
+/** Why a stated reserved value cannot be a real input, or undefined when it can. */
+function implausible(name: string, si: number, dim: DimKey): string | undefined {
+  if (POSITIVE.has(name) && !(si > 0)) return 'must be positive';
+  if (name === 'reliability' && si >= 1) return 'must be below 1 (e.g. 0.99 or 99 %)';
+  const m = MAGNITUDE[dim];
+  if (!m) return undefined;
+  const a = Math.abs(si);
+  if (a > m.max || (a > 0 && a < m.min))
+    return `= ${si.toExponential(3)} (SI) is not a plausible value: expected ${m.label}; check the unit`;
+  return undefined;
 }

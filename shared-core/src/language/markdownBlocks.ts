@@ -74,18 +74,19 @@ function fromCode(node: Code, lines: string[]): BlockSource | null {
   const closingRe = new RegExp(`^\\s*(?:>\\s*)*${fenceChars[0]}{${fenceChars.length},}\\s*$`);
   const closed = lastLine > openLine && closingRe.test(lines[lastLine] ?? '');
   const contentEnd = closed ? lastLine - 1 : lastLine;
-  const meta = (node.meta ?? '').trim();
-  const words = meta === '' ? [] : meta.split(/\s+/);
+  // The id is read from the raw line (remark unescapes the info string: `\\!` would shift columns).
+  const afterFence = fence[0].length;
+  const langAt = opening.indexOf('fatigue', afterFence);
+  if (langAt < 0) return null;
+  const infoStart = langAt + 'fatigue'.length;
+  const rest = opening.slice(infoStart);
+  const words = rest.trim() === '' ? [] : rest.trim().split(/\s+/);
   const id = words[0] ?? null;
-  const infoStart = opening.indexOf('fatigue', fence[0].length) + 'fatigue'.length;
-  let idStart = infoStart;
-  let idEnd = opening.length;
+  let idStart = langAt;
+  let idEnd = infoStart;
   if (id) {
-    idStart = opening.indexOf(id, infoStart);
+    idStart = infoStart + rest.indexOf(id);
     idEnd = idStart + id.length;
-  } else {
-    idStart = Math.max(0, opening.indexOf('fatigue'));
-    idEnd = idStart + 'fatigue'.length;
   }
   const contentLines: SourceLine[] = [];
   for (let l = openLine + 1; l <= contentEnd; l++) contentLines.push({ line: l, text: lines[l] ?? '' });

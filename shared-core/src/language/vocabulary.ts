@@ -281,3 +281,55 @@ export function nearest(word: string, choices: readonly string[], max = 3): stri
   }
   return bestD <= Math.max(max, Math.floor(word.length / 2)) ? best : undefined;
 }
+
+/** Plausible magnitudes by dimension (SI): outside them a stated value is an input error, not a design. */
+export const MAGNITUDE: Partial<Record<DimKey, { min: number; max: number; label: string }>> = {
+  length: { min: 1e-7, max: 1e4, label: 'between 0.1 um and 10 km' },
+  stress: { min: 0, max: 1e12, label: 'below 1e6 MPa' },
+  force: { min: 0, max: 1e12, label: 'below 1e12 N' },
+  moment: { min: 0, max: 1e12, label: 'below 1e12 N*m' },
+  temperature: { min: 0, max: 3000, label: 'between 0 K and 3000 K' },
+  toughness: { min: 0, max: 1e12, label: 'below 1e6 MPa*m^0.5' },
+  one: { min: 0, max: 1e15, label: 'below 1e15' },
+};
+
+/** Names that must be strictly positive (a zero or negative value is an input error). */
+export const POSITIVE = new Set([
+  'Sut',
+  'Sy',
+  'Se_prime',
+  'sigma_f_prime',
+  'f',
+  'ka',
+  'kb',
+  'kc',
+  'kd',
+  'ke',
+  'kmisc',
+  'reliability',
+  'd',
+  'D',
+  'r',
+  'd_hole',
+  'W',
+  't',
+  'D_i',
+  'w_c',
+  'h_c',
+  'Kt',
+  'Kts',
+  'Kt_ax',
+  'Kf',
+  'Kfs',
+  'Kf_ax',
+  'N',
+  'C_paris',
+  'm_paris',
+  'Y',
+  'a_i',
+  'a_c',
+  'K_IC',
+  'inspection_factor',
+  'q',
+  'qs',
+]);
