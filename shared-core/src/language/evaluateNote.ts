@@ -100,7 +100,7 @@ export function evaluateBlock(
   };
   try {
     checkHeader(ctx, block, seenIds);
-    const scope = blockScope(raw, previous);
+    const scope = blockScope(raw, previous, ctx.values);
     ctx.scope = scope;
     for (const [name, input] of inject ?? []) {
       raw.set(name, input.q.raw);
@@ -119,13 +119,6 @@ export function evaluateBlock(
     if (extras.crackCurve) result.crackCurve = extras.crackCurve;
     if (extras.histogram) result.histogram = extras.histogram;
     if (extras.criterion) result.criterion = extras.criterion;
-    for (const name of ctx.order) {
-      const v = ctx.values[name];
-      if (!raw.has(name) && v.si !== null) {
-        const vec = vectorOf(v.dim);
-        if (vec) raw.set(name, rawFromSI(v.si, vec));
-      }
-    }
     const requireStatements = statements.filter((s) => s.kind === 'require');
     const hasErrors = ctx.diagnostics.some((d) => d.severity === 'error');
     result.requirements = evaluateRequirements(ctx, requireStatements, scope);
@@ -184,11 +177,18 @@ function checkHeader(ctx: CheckContext, block: BlockSource, seenIds: Map<string,
     );
 }
 
-function blockScope(raw: Map<string, Unit | number>, previous: ReadonlyMap<string, CheckScopeEntry>): Scope {
+function blockScope(
+  raw: Map<string, Unit | number>,
+  previous: ReadonlyMap<string, CheckScopeEntry>,
+  values: CheckResult['values'],
+): Scope {
+  // Names of this block: stated ones as written; computed ones (for `require:` targets
+  // such as `0.5 * Se`) are built on first use.
+  const self: CheckScopeEntry = { result: { values } as CheckResult, raw };
   return {
-    get: (name) => raw.get(name),
+    get: (name) => memberValue(self, name),
     hasCheck: (check) => previous.has(check),
-    member: (check, member) => previous.get(check)?.raw.get(member),
+    member: (check, member) => memberValue(previous.get(check), member),
   };
 }
 
@@ -359,4 +359,18 @@ function implausible(name: string, si: number, dim: DimKey): string | undefined 
   if (a > m.max || (a > 0 && a < m.min))
     return `= ${si.toExponential(3)} (SI) is not a plausible value: expected ${m.label}; check the unit`;
   return undefined;
+}
+
+/** A value of an earlier check as a mathjs value, built on first use (most are never referenced). */
+export function memberValue(entry: CheckScopeEntry | undefined, name: string): Unit | number | undefined {
+  if (!entry) return undefined;
+  const hit = entry.raw.get(name);
+  if (hit !== undefined) return hit;
+  const v = entry.result.values[name];
+  if (!v || v.si === null) return undefined;
+  const vec = vectorOf(v.dim);
+  if (!vec) return undefined;
+  const raw = rawFromSI(v.si, vec);
+  entry.raw.set(name, raw);
+  return raw;
 }
