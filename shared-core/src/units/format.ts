@@ -75,6 +75,9 @@ export function formatValue(si: number, dim: DimKey, system: UnitSystem, digits 
 /** Cycle counts read better with grouping: 1.23e6 stays exponential, 12 500 is plain. */
 export function formatCycles(n: number): string {
   if (!Number.isFinite(n)) return 'not a number';
-  if (n >= 1e5) return formatNumber(n, 3);
+  if (n >= 1e5) {
+    const [m, e] = n.toExponential(2).split('e');
+    return `${trimZeros(m)}e${Number(e)}`;
+  }
   return String(Math.round(n));
 }
