@@ -1,5 +1,35 @@
 /** Public surface of the fatigue-notes core. Pure: no editor, no file system, no console. */
 export * from './computed';
+export {
+  centreCrackFiniteWidth,
+  constantGeometry,
+  criticalCrackSize,
+  type GeometryFactor,
+  geometryFactorAt,
+  inspectionInterval,
+  KSI_SQRT_IN_IN_MPA_SQRT_M,
+  PARIS_SOURCE,
+  type ParisInput,
+  parisConstantFromInch,
+  parisConstantNotes,
+  parisLife,
+  singleEdgeCrackFiniteWidth,
+  TADA_HANDBOOK,
+} from './crack';
+export {
+  cyclesToFailure,
+  type DamageContributor,
+  type DamageCycle,
+  equivalentCycles,
+  MINER_SOURCE,
+  MinerAccumulator,
+  type MinerResult,
+  type MinerRule,
+  minerDamage,
+  N1_LOW_CYCLE,
+  repeatsToFailure,
+  type SnLine as MinerSnLine,
+} from './damage';
 export type { HistoryChunkReader } from './language/checkContext';
 export { type EvaluateOptions, evaluateNote } from './language/evaluateNote';
 export { compileExpression, ExpressionError, evaluateExpression } from './language/expressions';
@@ -8,5 +38,26 @@ export { parseLine, parseStatements, type Statement } from './language/statement
 export * from './language/types';
 export { editDistance, INPUT_NAMES, nameInfo, nearest, OPTIONS, RESULT_NAMES } from './language/vocabulary';
 export { findMaterial, MATERIALS } from './materials';
+export {
+  type HistogramBin,
+  type HistogramLimits,
+  type HistoryCsvOptions,
+  HistoryCsvReader,
+  type HistoryDelimiter,
+  type HistoryIssue,
+  histogramLimitsFor,
+  isTimeColumnName,
+  parseHistoryNumber,
+  RAINFLOW_SOURCE,
+  RainflowCounter,
+  type RainflowCycle,
+  type RainflowOptions,
+  type RainflowResult,
+  RangeMeanHistogram as RainflowHistogram,
+  rainflow,
+  TurningPointDetector,
+  turningPoints,
+} from './rainflow';
 export type { DimKey } from './units/dimensions';
 export { formatNumber, formatValue, type UnitSystem } from './units/format';
+export * from './session';

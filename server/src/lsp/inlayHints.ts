@@ -1,0 +1,74 @@
+/**
+ * Inline results: beside each line, the values that line drives (`q`, `Kf` beside the notch
+ * radius, `kb` beside `d`, `ka` beside `surface:`), the key results beside `criterion:`
+ * (`n_f`, `n_y`, `N_f`, or `D`, `N_cg` ...), each requirement's actual value and verdict
+ * beside its `require:` item, and the tool's own value beside a value the note overrides.
+ */
+import type { CheckResult, Range, Value } from '@fatigue-notes/core';
+import { type InlayHint, InlayHintKind } from 'vscode-languageserver/node';
+import { isContentLine, type NoteView, overlaps } from './locate';
+
+/** Most values shown beside one line; the rest are in the hover. */
+const MAX_PER_LINE = 4;
+/** Results shown first when a line drives many. */
+const KEY_RESULTS = ['n_f', 'n_y', 'N_f', 'S_f', 'D', 'repeats', 'N_eq', 'N_cg', 'N_insp', 'a_c'];
+/** Shown in the hover and the panel, not inline (they would crowd the criterion line). */
+const NOT_INLINE = /^(n_f_|sigma_ar$)/;
+
+export function inlayHintsFor(view: NoteView, range: Range): InlayHint[] {
+  const out: InlayHint[] = [];
+  for (const c of view.result.checks) {
+    if (!overlaps(c.range, range)) continue;
+    hintsOfCheck(view, c, range, out);
+  }
+  return out;
+}
+
+function hintsOfCheck(view: NoteView, c: CheckResult, range: Range, out: InlayHint[]): void {
+  const byLine = new Map<number, Value[]>();
+  for (const name of c.order) {
+    const v = c.values[name];
+    if (!v.range) continue;
+    const line = v.range.start.line;
+    if (!isContentLine(c, line) || line < range.start.line || line > range.end.line) continue;
+    if (v.origin === 'stated' && !v.tool) continue;
+    if (v.origin !== 'stated' && NOT_INLINE.test(name)) continue;
+    const list = byLine.get(line);
+    if (list) list.push(v);
+    else byLine.set(line, [v]);
+  }
+  const requireLines = new Set(c.requirements.map((r) => r.range.start.line));
+  for (const [line, values] of byLine) {
+    if (requireLines.has(line)) continue;
+    const ranked = values.slice().sort((a, b) => rank(a.name) - rank(b.name));
+    const shown = ranked.slice(0, MAX_PER_LINE);
+    const parts = shown.map((v) =>
+      v.origin === 'stated' && v.tool ? `tool ${v.tool.display}` : `${v.name} ${v.display}`,
+    );
+    if (ranked.length > shown.length) parts.push('…');
+    out.push({
+      position: { line, character: view.line(line).length },
+      label: parts.join(' · '),
+      paddingLeft: true,
+      kind: InlayHintKind.Type,
+      tooltip: shown.map((v) => `${v.name}: ${v.meaning}`).join('\n'),
+    });
+  }
+  for (const r of c.requirements) {
+    const line = r.range.end.line;
+    if (line < range.start.line || line > range.end.line) continue;
+    const mark = r.met === true ? '✓' : r.met === false ? '✗' : '?';
+    out.push({
+      position: r.range.end,
+      label: `${mark} ${r.actualDisplay}`,
+      paddingLeft: true,
+      kind: InlayHintKind.Type,
+      tooltip: `${r.symbol} = ${r.actualDisplay}, required ${r.op} ${r.targetDisplay}`,
+    });
+  }
+}
+
+function rank(name: string): number {
+  const i = KEY_RESULTS.indexOf(name);
+  return i < 0 ? KEY_RESULTS.length : i;
+}
