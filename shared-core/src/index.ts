@@ -30,6 +30,8 @@ export {
   repeatsToFailure,
   type SnLine as MinerSnLine,
 } from './damage';
+export * from './design';
+export * from './diagrams';
 export type { HistoryChunkReader } from './language/checkContext';
 export { type EvaluateOptions, evaluateNote } from './language/evaluateNote';
 export { compileExpression, ExpressionError, evaluateExpression } from './language/expressions';
@@ -58,6 +60,7 @@ export {
   TurningPointDetector,
   turningPoints,
 } from './rainflow';
+export * from './review';
+export * from './session';
 export type { DimKey } from './units/dimensions';
 export { formatNumber, formatValue, type UnitSystem } from './units/format';
-export * from './session';

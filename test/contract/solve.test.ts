@@ -207,6 +207,29 @@ describe('solve-line diagnostics', () => {
     }
   });
 
+  it('a target that names values of the block and of an earlier check', () => {
+    // sigma_a = 0.5 * Se: Se itself follows d through kb, so the target moves with the trial value.
+    const own = check([...base, 'solve: d for sigma_a = 0.5 * Se']);
+    expect(errors(own)).toEqual([]);
+    expect(si(own, 'sigma_a') / si(own, 'Se')).toBeCloseTo(0.5, 9);
+    const text = [
+      '```fatigue first',
+      ...base,
+      'd = 30 mm',
+      '```',
+      '',
+      '```fatigue second',
+      ...base.map((l) => l.replace('180 N*m', '250 N*m').replace('-180 N*m', '-250 N*m')),
+      'solve: d for n_f = first.n_f',
+      '```',
+      '',
+    ].join('\n');
+    const r = evaluateNote(text);
+    expect(r.checks[1].diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
+    expect(si(r.checks[1], 'n_f')).toBeCloseTo(si(r.checks[0], 'n_f'), 9);
+    expect(si(r.checks[1], 'd')).toBeGreaterThan(0.03);
+  });
+
   it('other checks and later checks see the solved value (check.name references)', () => {
     const text = [
       '```fatigue sized',

@@ -41,8 +41,14 @@ export function evaluateFile(path: string): NoteResult {
 }
 
 function summaryLine(rel: string, r: NoteResult['checks'][number]): string {
-  const pick = ['n_f', 'n_y', 'N_f', 'S_f', 'D', 'repeats', 'N_cg', 'N_insp']
-    .filter((n) => r.values[n])
+  const names =
+    r.method === 'damage'
+      ? ['D', 'repeats', 'N_eq']
+      : r.method === 'crack-growth'
+        ? ['a_c', 'N_cg', 'N_insp']
+        : ['n_f', 'n_y', 'N_f', 'S_f', 'd'];
+  const pick = names
+    .filter((n) => r.values[n] && (n !== 'd' || r.values[n].origin === 'computed'))
     .map((n) => `${n} ${r.values[n].display}`);
   const status = r.status.toUpperCase().padEnd(9);
   return `${status} ${rel}:${r.range.start.line + 1} ${r.id ?? '(no id)'}${r.title ? ` — ${r.title}` : ''}${pick.length ? `  [${pick.join(', ')}]` : ''}`;

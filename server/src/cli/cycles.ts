@@ -29,8 +29,8 @@ import {
   RAINFLOW_SOURCE,
   RainflowCounter,
   type RainflowResult,
-  RangeMeanHistogram,
-} from '@fatigue-notes/core/src/rainflow';
+  RainflowHistogram as RangeMeanHistogram,
+} from '@fatigue-notes/core';
 import type { Io } from './io';
 
 const USAGE =

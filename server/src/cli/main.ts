@@ -1,7 +1,9 @@
 /** Entry of the `fatigue-notes` command: check, cycles, lsp, report, compare. */
 import { runCheckCommand } from './check';
+import { runCompareCommand } from './compare';
 import { runCyclesCommand } from './cycles';
 import { type Io, processIo } from './io';
+import { runReportCommand } from './report';
 import { VERSION } from './version';
 
 const USAGE = `fatigue-notes ${VERSION}: evaluate fatigue design-check blocks in Markdown calc notes
@@ -10,6 +12,8 @@ usage:
   fatigue-notes check PATH... [--format text|json|sarif]
   fatigue-notes cycles FILE.csv [--column N|NAME] [--format text|json] [--gate RANGE] [--bins N]
   fatigue-notes lsp --stdio
+  fatigue-notes report NOTE.md [-o NOTE.html]
+  fatigue-notes compare OLD.md NEW.md [--format text|json]   (either may be REV:path)
 
 The tool assists a qualified engineer; local codes, standards and licensed practice govern.
 `;
@@ -21,6 +25,10 @@ export async function main(argv: string[], io: Io): Promise<number> {
       return runCheckCommand(rest, io);
     case 'cycles':
       return runCyclesCommand(rest, io);
+    case 'report':
+      return runReportCommand(rest, io);
+    case 'compare':
+      return runCompareCommand(rest, io);
     case 'lsp': {
       const { startServer } = await import('../lsp/server');
       startServer();

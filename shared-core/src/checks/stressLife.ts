@@ -9,17 +9,15 @@ import {
   criterionModel,
   fatigueSafetyFactor,
   firstCycleYieldFactor,
-  type LoadLine,
   langerLine,
-  type StrengthSet,
 } from '../criteria';
 import type { CheckContext } from '../language/checkContext';
 import type { HaighData, SnData } from '../language/types';
-import { defaultWalkerGamma, estimateSigmaFPrimeSteel } from '../meanstress';
 import { lifeAtStress, strengthAtLife } from '../sn';
 import { equivalentStresses } from '../stress';
 import { biaxialVonMises } from '../stress/biaxial';
 import { concentration } from './concentration';
+import { chooseCriterion, needsYield, strengthSetFor } from './criterionChoice';
 import { enduranceChain, type LoadKind } from './enduranceChain';
 import { active, nominalStresses } from './loads';
 import { readStrengths } from './material';
@@ -71,8 +69,8 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
     sm = ctx.result(
       'tau_m_eq',
       computed(
-        conc.Kfsm * s.torsion.m,
-        'tau_m_eq = Kfs * tau_m',
+        conc.Kfsm * Math.abs(s.torsion.m),
+        'tau_m_eq = Kfs * |tau_m|  (the sense of a steady torque does not relieve the shaft)',
         "Budynas & Nisbett, Shigley's MED 10th ed., Sec. 6-15 (torsion)",
       ),
       ['Kfs', 'tau_m'],
@@ -131,7 +129,6 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
   if (sa === null || sm === null) return {};
 
   // First-cycle yield.
-  const SyRoute = Sy;
   if (Sy !== undefined && smax !== null) {
     const ny = ctx.result('n_y', firstCycleYieldFactor(Sy, smax), ['Sy', 'sigma_max_eq'], {
       range: ctx.options.get('criterion')?.whole ?? ctx.header,
@@ -145,17 +142,9 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
       );
   }
 
-  const critStmt = ctx.options.get('criterion');
-  let criterion = ctx.option('criterion') as CriterionKey | undefined;
-  if (!critStmt) {
-    ctx.diag('warning', 'no-criterion', 'no `criterion:` stated: Goodman assumed', ctx.header, [
-      ctx.insertFix('State `criterion: goodman`', 'criterion: goodman'),
-    ]);
-    criterion = 'goodman';
-  }
-  if (!criterion) return {};
-  const lineOpt = (ctx.option('load-line') ?? 'proportional') as LoadLine;
-  const critRange = critStmt?.whole ?? ctx.header;
+  const choice = chooseCriterion(ctx);
+  if (!choice) return {};
+  const { criterion, lineOpt, critRange } = choice;
 
   if (chain.S === null && chain.line === null) return { criterion };
 
@@ -180,26 +169,7 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
   }
 
   // Strength set of the route (pure torsion works in shear).
-  let sigma_f_prime = ctx.input('sigma_f_prime');
-  if (sigma_f_prime === undefined && criterion === 'morrow')
-    sigma_f_prime =
-      ctx.result('sigma_f_prime', estimateSigmaFPrimeSteel(Sut), ['Sut'], { range: critRange }) ?? undefined;
-  let gamma = ctx.input('gamma_walker');
-  if (gamma === undefined && criterion === 'walker')
-    gamma =
-      ctx.result(
-        'gamma_walker',
-        defaultWalkerGamma(st.cls === 'aluminium' ? 'aluminium' : 'steel', Sut),
-        ['Sut'],
-        { range: critRange },
-      ) ?? undefined;
-  const strengths = (Sval: number): StrengthSet => ({
-    S: Sval,
-    Sut: chain.Su,
-    Sy: chain.shear ? 0.577 * (SyRoute ?? chain.Su) : (SyRoute ?? Number.NaN),
-    ...(sigma_f_prime !== undefined ? { sigma_f_prime } : {}),
-    ...(gamma !== undefined ? { gamma_walker: gamma } : {}),
-  });
+  const strengths = strengthSetFor(ctx, st, chain, choice);
 
   let haigh: HaighData | undefined;
   if (S !== null && S > 0) {
@@ -210,7 +180,7 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
       chain.shear ? 'tau_a_eq' : 'sigma_a_eq',
       chain.shear ? 'tau_m_eq' : 'sigma_m_eq',
     ];
-    const needsSy = (k: CriterionKey) => k === 'soderberg' || k === 'asme-elliptic';
+    const needsSy = needsYield;
     if (needsSy(criterion) && Sy === undefined) {
       ctx.diag(
         'error',

@@ -27,6 +27,7 @@
  * Work is split in steps (one block evaluated per step) so that a caller can interleave
  * other work and abandon a stale update: nothing is committed until `finish()`.
  */
+import { solveBlock } from '../design/solve';
 import { type CheckScopeEntry, type EvaluateOptions, evaluateBlock } from '../language/evaluateNote';
 import { type BlockSource, findFatigueBlocks, ID_PATTERN, splitLines } from '../language/markdownBlocks';
 import type { CheckResult, Diagnostic, NoteResult, Range } from '../language/types';
@@ -305,7 +306,9 @@ export class NoteSession {
       const head = newHeads[index];
       const source = sourceOf(head, lines);
       const t0 = now();
-      const scope = evaluateBlock(source, previous, seenIds, session.blockOptions);
+      const scope = solveBlock(source, previous, (inject, trial) =>
+        evaluateBlock(source, previous, trial ? new Map(seenIds) : seenIds, session.blockOptions, inject),
+      );
       const ms = now() - t0;
       const lints = session.options.lints;
       if (lints) scope.result.diagnostics = scope.result.diagnostics.filter((d) => lints[d.code] !== false);
