@@ -72,3 +72,22 @@ describe('diagnostics of a note with mistakes', () => {
     expect(result.checks.map((c) => c.status)).toEqual(['error', 'pass', 'error']);
   });
 });
+
+describe('domain and order diagnostics (test/fixtures/compressive-gerber.md)', () => {
+  const t = readFileSync(new URL('../fixtures/compressive-gerber.md', import.meta.url), 'utf8');
+  const r = evaluateNote(t);
+  const at = (code: string) => r.diagnostics.find((d) => d.code === code);
+  it('Gerber at a compressive mean: the limiting answer, with a warning on the criterion line', () => {
+    const d = at('criterion-domain');
+    expect(d?.severity).toBe('warning');
+    expect(d?.range.start.line).toBe(13);
+    // Limiting answer: the horizontal line n_f = Se / sigma_a_eq (Budynas & Nisbett, Shigley's MED, Fig. 6-27 discussion).
+    const c = r.checks[0];
+    expect(c.values.n_f.si).toBeCloseTo(c.values.Se.si! / c.values.sigma_a_eq.si!, 10);
+  });
+  it('a name used above the line that states it: says where it is stated', () => {
+    const d = at('unknown-name');
+    expect(d?.range.start.line).toBe(11);
+    expect(d?.message).toContain('stated below, on line 13');
+  });
+});

@@ -25,6 +25,8 @@ export interface HistoryChunkReader {
   ): { ok: true } | { ok: false; code: string; message: string };
 }
 
+const SURFACED = new Set(['criterion-domain', 'load-line']);
+
 export class CheckContext {
   readonly values: Record<string, Value> = {};
   readonly order: string[] = [];
@@ -160,7 +162,9 @@ export class CheckContext {
     const notes: string[] = [];
     if (c?.notes)
       for (const n of c.notes) {
-        const sev = n.severity ?? 'warning';
+        // A criterion used outside its domain and a load line that cannot bound the factor
+        // are engineering warnings whatever the method's own severity.
+        const sev = SURFACED.has(n.code) ? 'warning' : (n.severity ?? 'warning');
         if (sev === 'information' || sev === 'hint') notes.push(n.message);
         else this.diag(sev, n.code, `${name}: ${n.message}`, opts.range ?? this.rangeOf(name));
       }

@@ -199,6 +199,10 @@ function readStatements(
   raw: Map<string, Unit | number>,
 ): void {
   const lineOfName = new Map<string, number>();
+  // First line where each name is stated, to tell "stated below" from "never stated".
+  const statementsBelow = new Map<string, number>();
+  for (const s of statements)
+    if (s.kind === 'assign' && !statementsBelow.has(s.name.text)) statementsBelow.set(s.name.text, s.line);
   for (const s of statements) {
     switch (s.kind) {
       case 'bad':
@@ -208,7 +212,7 @@ function readStatements(
         readOption(ctx, s);
         break;
       case 'assign':
-        readAssign(ctx, s, scope, raw, lineOfName);
+        readAssign(ctx, s, scope, raw, lineOfName, statementsBelow);
         break;
       case 'spectrum':
         ctx.spectrum.push(s);
@@ -279,6 +283,7 @@ function readAssign(
   scope: Scope,
   raw: Map<string, Unit | number>,
   lineOfName: Map<string, number>,
+  statementsBelow: ReadonlyMap<string, number>,
 ): void {
   const name = s.name.text;
   const prior = lineOfName.get(name);
@@ -310,7 +315,14 @@ function readAssign(
       err.offset !== undefined
         ? lineRange(s.line, start, Math.min(start + (err.length ?? 1), s.expr.range.end.character))
         : s.expr.range;
-    ctx.diag('error', err.code, `${name}: ${err.message}`, r);
+    let message = `${name}: ${err.message}`;
+    if (err.code === 'unknown-name') {
+      const used = /`([A-Za-z_][A-Za-z0-9_]*)`/.exec(err.message)?.[1];
+      const later = used ? statementsBelow.get(used) : undefined;
+      if (later !== undefined && later > s.line)
+        message = `${name}: \`${used}\` is stated below, on line ${later + 1}: names are read top to bottom, so move that line above this one`;
+    }
+    ctx.diag('error', err.code, message, r);
     return;
   }
   const info = INPUT_NAMES[name] ?? RESULT_NAMES[name];
