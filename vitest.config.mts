@@ -2,7 +2,12 @@ import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
   test: {
-    include: ['shared-core/test/**/*.test.ts', 'server/test/**/*.test.ts', 'client/test/**/*.test.ts', 'test/**/*.test.ts'],
+    include: [
+      'shared-core/test/**/*.test.ts',
+      'server/test/**/*.test.ts',
+      'client/test/**/*.test.ts',
+      'test/**/*.test.ts',
+    ],
     testTimeout: 60_000,
     hookTimeout: 120_000,
   },

@@ -1,6 +1,6 @@
 // One build for the whole repository: esbuild bundles the command line / language server
 // (server/dist/cli.js) and the VS Code client (client/dist/extension.js, when present).
-import { existsSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync } from 'node:fs';
 import { build } from 'esbuild';
 
 const common = {
@@ -19,4 +19,20 @@ if (existsSync('client/src/extension.ts')) {
     outfile: 'client/dist/extension.js',
     external: ['vscode'],
   });
+  // The summary panel's webview script, and what the packaged extension carries with it:
+  // the language server (the same bundle as the CLI) and the block grammar.
+  await build({
+    ...common,
+    platform: 'browser',
+    target: 'es2022',
+    format: 'iife',
+    entryPoints: ['client/src/panel/webview/main.ts'],
+    outfile: 'client/dist/panel.js',
+  });
+  mkdirSync('client/dist/syntaxes', { recursive: true });
+  copyFileSync('server/dist/cli.js', 'client/dist/server.js');
+  copyFileSync(
+    'syntaxes/fatigue-block.tmLanguage.json',
+    'client/dist/syntaxes/fatigue-block.tmLanguage.json',
+  );
 }

