@@ -35,6 +35,7 @@ export * from './diagrams';
 export type { HistoryChunkReader } from './language/checkContext';
 export { type EvaluateOptions, evaluateNote } from './language/evaluateNote';
 export { compileExpression, ExpressionError, evaluateExpression } from './language/expressions';
+export { headlineValues } from './language/headline';
 export { type BlockSource, findFatigueBlocks, splitLines } from './language/markdownBlocks';
 export { parseLine, parseStatements, type Statement } from './language/statements';
 export * from './language/types';

@@ -5,7 +5,7 @@
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
-import { evaluateNote, type NoteResult } from '@fatigue-notes/core';
+import { evaluateNote, headlineValues, type NoteResult } from '@fatigue-notes/core';
 import { decodeNote } from '../files/decode';
 import { historyReader, workspaceOf } from '../files/historyReader';
 import type { Io } from './io';
@@ -41,15 +41,7 @@ export function evaluateFile(path: string): NoteResult {
 }
 
 function summaryLine(rel: string, r: NoteResult['checks'][number]): string {
-  const names =
-    r.method === 'damage'
-      ? ['D', 'repeats', 'N_eq']
-      : r.method === 'crack-growth'
-        ? ['a_c', 'N_cg', 'N_insp']
-        : ['n_f', 'n_y', 'N_f', 'S_f', 'd'];
-  const pick = names
-    .filter((n) => r.values[n] && (n !== 'd' || r.values[n].origin === 'computed'))
-    .map((n) => `${n} ${r.values[n].display}`);
+  const pick = headlineValues(r).map((v) => `${v.name} ${v.display}`);
   const status = r.status.toUpperCase().padEnd(9);
   return `${status} ${rel}:${r.range.start.line + 1} ${r.id ?? '(no id)'}${r.title ? ` — ${r.title}` : ''}${pick.length ? `  [${pick.join(', ')}]` : ''}`;
 }

@@ -1,5 +1,7 @@
 /** A lens above each check: its status and its key result (safety factor, life, damage). */
+
 import type { CheckResult } from '@fatigue-notes/core';
+import { headlineValues } from '@fatigue-notes/core';
 import type { CodeLens } from 'vscode-languageserver/node';
 import type { NoteView } from './locate';
 
@@ -15,10 +17,7 @@ const STATUS: Record<CheckResult['status'], string> = {
 
 export function lensTitle(c: CheckResult): string {
   const parts = [STATUS[c.status]];
-  for (const n of ['n_f', 'n_y', 'N_f', 'D', 'repeats', 'N_cg', 'N_insp']) {
-    const v = c.values[n];
-    if (v) parts.push(`${n} ${v.display}`);
-  }
+  for (const v of headlineValues(c)) parts.push(`${v.name} ${v.display}`);
   const failed = c.requirements.filter((r) => r.met === false).map((r) => r.text);
   if (failed.length > 0) parts.push(`not met: ${failed.join(', ')}`);
   return parts.join(' · ');
