@@ -111,7 +111,9 @@ function parseArgs(args: string[]): CyclesArgs | { error: string } | { help: tru
 class Output {
   private parts: string[] = [];
   private size = 0;
-  constructor(private readonly write: (s: string) => void) {}
+  /** True when the last write was refused room: the reader waits for the pipe to drain. */
+  full = false;
+  constructor(private readonly write: (s: string) => boolean | undefined | void) {}
   put(s: string): void {
     this.parts.push(s);
     this.size += s.length;
@@ -119,7 +121,7 @@ class Output {
   }
   flush(): void {
     if (this.parts.length === 0) return;
-    this.write(this.parts.join(''));
+    this.full = this.write(this.parts.join('')) === false;
     this.parts = [];
     this.size = 0;
   }
@@ -128,12 +130,21 @@ class Output {
 class ReadFailure extends Error {}
 
 /** Streams the file through the reader; stops early when the reader gives up. */
-async function feedFile(path: string, reader: HistoryCsvReader): Promise<void> {
+async function feedFile(
+  path: string,
+  reader: HistoryCsvReader,
+  backpressure?: { out: Output; drain?: () => Promise<void> },
+): Promise<void> {
   const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: CHUNK });
   try {
     for await (const chunk of stream) {
       reader.feed(chunk as string);
       if (reader.fatal) break;
+      // A slow consumer of the output (a pipe) must not make the output pile up in memory.
+      if (backpressure?.out.full && backpressure.drain) {
+        await backpressure.drain();
+        backpressure.out.full = false;
+      }
     }
   } catch (e) {
     throw new ReadFailure((e as Error).message);
@@ -226,7 +237,7 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
     };
     const counter = new RainflowCounter({ gate, onCycle });
     reader = new HistoryCsvReader({ column, onValue: (x) => counter.push(x) });
-    await feedFile(path, reader);
+    await feedFile(path, reader, { out, drain: io.drain });
 
     const issues = [...reader.issues];
     if (reader.fatal) {
