@@ -113,7 +113,7 @@ class Output {
   private size = 0;
   /** True when the last write was refused room: the reader waits for the pipe to drain. */
   full = false;
-  constructor(private readonly write: (s: string) => boolean | undefined | void) {}
+  constructor(private readonly write: (s: string) => unknown) {}
   put(s: string): void {
     this.parts.push(s);
     this.size += s.length;

@@ -1,6 +1,6 @@
 export interface Io {
   /** Writes text; may return false when the consumer is slower (then wait for `drain`). */
-  stdout: (s: string) => boolean | undefined | void;
+  stdout: (s: string) => unknown;
   stderr: (s: string) => void;
   cwd: string;
   /** Resolves when stdout has room again (backpressure of a slow pipe). */
