@@ -7,6 +7,8 @@
 //                     over stdio (goal: median at most 20 ms)
 //   hover             textDocument/hover round trip (goal: median at most 5 ms)
 //   memory            resident set of the server process after the big note
+//
+// With --json the last stdout line is the figures as rows for scripts/bench.mjs.
 import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -295,6 +297,31 @@ async function main() {
         `${os.cpus().length} CPUs: wall times grow with load`,
       ],
     ];
+    const json = [
+      { figure: `note: ${CHECKS} checks`, value: text.length / 1024, unit: 'KiB' },
+      { figure: 'remark-parse alone (best of 3)', value: remarkMs, unit: 'ms' },
+      { figure: 'full evaluation, evaluateNote (best of 3)', value: fullMs, unit: 'ms' },
+      { figure: 'full evaluation / remark alone', value: fullMs / remarkMs, unit: 'x', goal: '<= 1.5' },
+      { figure: 'one-block edit, session in-process, median', value: median(sessionWall), unit: 'ms' },
+      { figure: 'one-block edit, session in-process, CPU median', value: median(sessionCpu), unit: 'ms' },
+      { figure: 'open -> first diagnostics (stdio)', value: openMs, unit: 'ms' },
+      {
+        figure: 'one-block edit -> diagnostics, median',
+        value: median(editMs),
+        unit: 'ms',
+        goal: '<= 20 ms',
+      },
+      { figure: 'one-block edit -> diagnostics, max', value: Math.max(...editMs), unit: 'ms' },
+      { figure: 'line added/removed -> diagnostics, median', value: median(lineEditMs), unit: 'ms' },
+      { figure: 'hover, median', value: median(hoverMs), unit: 'ms', goal: '<= 5 ms' },
+      { figure: 'server RSS after open', value: rssAfterOpen, unit: 'MB' },
+      { figure: 'server RSS at the end', value: rssEnd, unit: 'MB' },
+    ];
+    if (process.argv.includes('--json')) {
+      for (const [a, b, n] of rows) console.log(`${a}  ${b}  ${n}`);
+      console.log(JSON.stringify(json));
+      return;
+    }
     const w0 = Math.max(...rows.map((r) => r[0].length));
     const w1 = Math.max(...rows.map((r) => r[1].length));
     console.log(`${'measure'.padEnd(w0)}  ${'value'.padEnd(w1)}  note`);

@@ -1,5 +1,6 @@
 // `npm run bench`: one table of every figure the project tracks, each beside its goal or
-// peer. Sections: core evaluation, language server, rainflow counting, bundle sizes.
+// peer. Sections: core evaluation, language server, rainflow counting, hardening (10 MB note,
+// edit storm), bundle sizes.
 import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readdirSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -11,13 +12,21 @@ const add = (section, r) => rows.push({ section, ...r });
 
 // Core figures, bundled on the fly (the core is TypeScript used from source).
 const out = join(mkdtempSync(join(tmpdir(), 'fn-bench-')), 'core-bench.cjs');
-await build({ entryPoints: ['scripts/bench/coreBench.ts'], bundle: true, platform: 'node', format: 'cjs', outfile: out, logLevel: 'error' });
+await build({
+  entryPoints: ['scripts/bench/coreBench.ts'],
+  bundle: true,
+  platform: 'node',
+  format: 'cjs',
+  outfile: out,
+  logLevel: 'error',
+});
 for (const r of JSON.parse(execFileSync(process.execPath, [out], { encoding: 'utf8' }))) add('core', r);
 
 // Other sections write JSON rows on their last stdout line, when their scripts exist.
 for (const [section, script, args] of [
   ['server', 'scripts/bench-lsp.mjs', ['--json']],
   ['rainflow', 'scripts/bench-rainflow.mjs', ['--json']],
+  ['hardening', 'scripts/bench-hardening.mjs', ['--json']],
 ]) {
   if (!existsSync(script)) continue;
   const r = spawnSync(process.execPath, [script, ...args], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
@@ -39,7 +48,9 @@ for (const f of readdirSync('.').filter((n) => n.endsWith('.vsix')))
 
 const fmt = (x) => (Number.isFinite(x) ? (Math.abs(x) >= 100 ? x.toFixed(0) : x.toPrecision(3)) : 'n/a');
 const w = Math.max(...rows.map((r) => r.figure.length)) + 2;
-console.log(`${'section'.padEnd(10)}${'figure'.padEnd(w)}${'value'.padStart(12)}  ${'unit'.padEnd(9)}goal / peer`);
+console.log(
+  `${'section'.padEnd(10)}${'figure'.padEnd(w)}${'value'.padStart(12)}  ${'unit'.padEnd(9)}goal / peer`,
+);
 for (const r of rows)
   console.log(
     `${r.section.padEnd(10)}${r.figure.padEnd(w)}${fmt(r.value).padStart(12)}  ${r.unit.padEnd(9)}${[r.goal, r.peer].filter(Boolean).join('; ')}`,

@@ -175,3 +175,58 @@ describe('evaluator properties on well-formed blocks with random numbers', () =>
     );
   });
 });
+
+describe('evaluator properties on hostile and odd input (issue 7)', () => {
+  const hostile = fc.constantFrom(
+    'import("fs")',
+    'createUnit("foo", "1 m")',
+    'evaluate("1")',
+    'f(x) = x',
+    'x = 2',
+    '[1,2,3]',
+    'zeros(1e4,1e4)',
+    '"a" + "b"',
+    '2^2^2^2^2^2',
+    '1e308*10',
+    'sqrt(-1) MPa',
+    'e^1000',
+    'factorial(1e6)',
+    'x.constructor',
+    'toString.constructor',
+    '__proto__',
+    'cos.apply',
+    '5 mm to foo',
+    `${'('.repeat(300)}1${')'.repeat(300)}`,
+  );
+  const reserved = fc.constantFrom('constructor', '__proto__', 'toString', 'valueOf', 'hasOwnProperty');
+  const junk = fc.string({ unit: 'binary', maxLength: 16 });
+  const oddStatement = fc.oneof(
+    statement,
+    fc.tuple(fc.constantFrom(...names), hostile).map(([n, e]) => `${n} = ${e}`),
+    fc.tuple(reserved, expr).map(([n, e]) => `${n} = ${e}`),
+    reserved.map((n) => `require: ${n} >= 1`),
+    reserved.map((n) => `x = p.${n}`),
+    fc.tuple(fc.constantFrom(...names), junk).map(([n, j]) => `${n} = ${j}`),
+    junk,
+    fc.tuple(fc.constantFrom(...names), expr).map(([n, e]) => `\t${n}\t=\t${e}\t`),
+  );
+
+  it('random blocks of hostile, reserved and junk statements, with any line ends and a BOM, stay sound', () => {
+    fc.assert(
+      fc.property(
+        fc.array(oddStatement, { maxLength: 20 }),
+        fc.constantFrom('\n', '\r\n', '\r'),
+        fc.boolean(),
+        (stmts, eol, bom) => {
+          const text = `${bom ? '\uFEFF' : ''}${['# note', '', '```fatigue p', ...stmts, '```', ''].join(eol)}`;
+          const r = evaluateNote(text);
+          assertSound(text, r);
+          // Line ends never change a result: the LF twin gives the same (when no junk carries its own line ends).
+          if (!stmts.some((s) => /[\r\n\u2028\u2029]/.test(s)))
+            expect(r).toStrictEqual(evaluateNote(text.split(eol).join('\n')));
+        },
+      ),
+      { numRuns: 500 },
+    );
+  });
+});

@@ -1,4 +1,6 @@
 /** Entry of the `fatigue-notes` command: check, cycles, lsp, report, compare. */
+
+import { isParseWorker, runParseWorker } from '../lsp/parseWorker';
 import { runCheckCommand } from './check';
 import { runCompareCommand } from './compare';
 import { runCyclesCommand } from './cycles';
@@ -50,12 +52,15 @@ export async function main(argv: string[], io: Io): Promise<number> {
   }
 }
 
-main(process.argv.slice(2), processIo).then(
-  (code) => {
-    if (code >= 0) process.exitCode = code;
-  },
-  (e) => {
-    process.stderr.write(`fatigue-notes: ${e instanceof Error ? e.stack : String(e)}\n`);
-    process.exitCode = 2;
-  },
-);
+// The language server runs this same bundle as its parse worker (lsp/parseWorker.ts).
+if (isParseWorker()) runParseWorker();
+else
+  main(process.argv.slice(2), processIo).then(
+    (code) => {
+      if (code >= 0) process.exitCode = code;
+    },
+    (e) => {
+      process.stderr.write(`fatigue-notes: ${e instanceof Error ? e.stack : String(e)}\n`);
+      process.exitCode = 2;
+    },
+  );

@@ -1,9 +1,11 @@
 /**
  * Reads history files for `method: damage` on behalf of the core: only files inside the
  * workspace, links resolved before the check, read in 64 KiB chunks so that memory does not
- * grow with the file.
+ * grow with the file. Only regular files are read: a directory, a FIFO or a device is
+ * refused, and the file is opened without blocking and checked again once open, so that a
+ * FIFO put in its place between the check and the open cannot hang the server.
  */
-import { closeSync, openSync, readSync, realpathSync, statSync } from 'node:fs';
+import { closeSync, constants, fstatSync, openSync, readSync, realpathSync, statSync } from 'node:fs';
 import { dirname, isAbsolute, relative, resolve, sep } from 'node:path';
 import { StringDecoder } from 'node:string_decoder';
 import type { HistoryChunkReader } from '@fatigue-notes/core';
@@ -55,9 +57,8 @@ export function historyReader(notePath: string, workspaceRoot: string, allowRead
         };
       let fd: number;
       try {
-        if (!statSync(real).isFile())
-          return { ok: false, code: 'history-missing', message: `\`${relativePath}\` is not a file` };
-        fd = openSync(real, 'r');
+        if (!statSync(real).isFile()) return notAFile(relativePath);
+        fd = openSync(real, constants.O_RDONLY | (constants.O_NONBLOCK ?? 0));
       } catch (e) {
         return {
           ok: false,
@@ -66,6 +67,7 @@ export function historyReader(notePath: string, workspaceRoot: string, allowRead
         };
       }
       try {
+        if (!fstatSync(fd).isFile()) return notAFile(relativePath);
         const buf = Buffer.allocUnsafe(64 * 1024);
         const decoder = new StringDecoder('utf8');
         for (;;) {
@@ -80,6 +82,14 @@ export function historyReader(notePath: string, workspaceRoot: string, allowRead
       }
       return { ok: true };
     },
+  };
+}
+
+function notAFile(relativePath: string): { ok: false; code: string; message: string } {
+  return {
+    ok: false,
+    code: 'history-missing',
+    message: `\`${relativePath}\` is not a regular file (a folder, a pipe or a device is not read)`,
   };
 }
 

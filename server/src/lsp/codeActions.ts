@@ -4,8 +4,13 @@
  * check's unit system; and, when the settings give a default required safety factor,
  * adding `require: n_f >= X` to a check that has no requirement.
  */
-import { type CheckResult, formatNumber, type Range } from '@fatigue-notes/core';
-import { displayUnit, toDisplayNumber } from '@fatigue-notes/core';
+import {
+  type CheckResult,
+  displayUnit,
+  formatNumber,
+  type Range,
+  toDisplayNumber,
+} from '@fatigue-notes/core';
 import { type CodeAction, CodeActionKind } from 'vscode-languageserver/node';
 import { NO_REQUIREMENT, toLspDiagnostic } from './diagnostics';
 import { checkAt, isContentLine, type NoteView, overlaps, statementOn } from './locate';

@@ -6,6 +6,7 @@
  */
 import {
   type CheckResult,
+  DIM_LABEL,
   findMaterial,
   formatNumber,
   INPUT_NAMES,
@@ -14,8 +15,8 @@ import {
   OPTIONS,
   type Position,
   RESULT_NAMES,
+  unitChoices,
 } from '@fatigue-notes/core';
-import { DIM_LABEL, unitChoices } from '@fatigue-notes/core';
 import {
   type CompletionItem,
   CompletionItemKind,

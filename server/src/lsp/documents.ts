@@ -3,6 +3,11 @@
  * session each, and the scheduling of their evaluation: debounced, sliced, and abandoned
  * when a newer version arrives. Requests that need the current result call `view()`,
  * which finishes any pending evaluation first.
+ *
+ * Large notes (issue 7): the Markdown parse of a note of `LARGE_NOTE_CHARS` or more runs on
+ * the parse worker (`parseWorker.ts`) and its blocks are then evaluated in slices here, so
+ * that the server keeps answering; requests on such a note are answered from its last
+ * evaluated version instead of waiting for the one in progress.
  */
 import { fileURLToPath } from 'node:url';
 import type { HistoryChunkReader, NoteResult } from '@fatigue-notes/core';
@@ -11,12 +16,19 @@ import { TextDocument } from 'vscode-languageserver-textdocument';
 import { historyReader, isInside, workspaceOf } from '../files/historyReader';
 import { debounceDelay } from './diagnostics';
 import type { NoteView } from './locate';
+import { ParseWorker } from './parseWorker';
 import { evaluateOptionsOf, type FatigueSettings } from './settings';
 
 /** Milliseconds of evaluation per slice before the server looks at its queue again. */
 const SLICE_MS = 15;
 /** Beyond this many pending changes the hints are dropped (the session diffs the text itself). */
 const MAX_PENDING_CHANGES = 200;
+/** Notes at least this long are parsed off the main thread and never finished by a request. */
+export const LARGE_NOTE_CHARS = 256 * 1024;
+/** Largest note parsed on the main thread when the parse worker failed on it. */
+const MAIN_THREAD_PARSE_CHARS = 2 * 1024 * 1024;
+/** Milliseconds a check may read history files while the engineer types (the command line has no limit). */
+export const HISTORY_BUDGET_MS = 3000;
 
 interface OpenNote {
   doc: TextDocument;
@@ -27,6 +39,8 @@ interface OpenNote {
   pendingOverflow: boolean;
   timer?: ReturnType<typeof setTimeout>;
   job?: { job: SessionJob; version: number; pendingCount: number; busyMs: number };
+  /** A parse of a large note in flight on the parse worker, for this version. */
+  parse?: { version: number };
   evaluatedVersion: number;
   lastCostMs: number;
 }
@@ -42,8 +56,11 @@ export interface DocumentsHost {
 
 export class NoteDocuments {
   private readonly notes = new Map<string, OpenNote>();
+  private readonly parser: ParseWorker;
 
-  constructor(private readonly host: DocumentsHost) {}
+  constructor(private readonly host: DocumentsHost) {
+    this.parser = new ParseWorker((m) => host.onError(m));
+  }
 
   has(uri: string): boolean {
     return this.notes.has(uri);
@@ -85,6 +102,7 @@ export class NoteDocuments {
     if (!note) return false;
     if (note.timer) clearTimeout(note.timer);
     note.session.reset(); // supersedes a running job
+    note.parse = undefined;
     this.notes.delete(uri);
     return true;
   }
@@ -96,6 +114,7 @@ export class NoteDocuments {
       note.pending = [];
       note.pendingOverflow = false;
       note.job = undefined;
+      note.parse = undefined;
       note.evaluatedVersion = -1; // a request now evaluates first instead of reading the empty session
       this.schedule(uri, 0);
     }
@@ -105,7 +124,9 @@ export class NoteDocuments {
   view(uri: string): NoteView | undefined {
     const note = this.notes.get(uri);
     if (!note) return undefined;
-    if (note.evaluatedVersion !== note.doc.version || note.job) this.runNow(uri, note);
+    // A large note is not finished here: its last evaluated version answers meanwhile.
+    if ((note.evaluatedVersion !== note.doc.version || note.job || note.parse) && !isLarge(note))
+      this.runNow(uri, note);
     return this.viewOf(uri, note);
   }
 
@@ -123,7 +144,8 @@ export class NoteDocuments {
   }
 
   private newSession(uri: string): NoteSession {
-    return new NoteSession(evaluateOptionsOf(this.host.settings(), this.historiesFor(uri)));
+    const options = evaluateOptionsOf(this.host.settings(), this.historiesFor(uri));
+    return new NoteSession({ ...options, historyBudgetMs: HISTORY_BUDGET_MS });
   }
 
   private historiesFor(uri: string): HistoryChunkReader | undefined {
@@ -153,8 +175,42 @@ export class NoteDocuments {
   private startJob(uri: string, note: OpenNote): void {
     if (this.notes.get(uri) !== note) return;
     const text = note.doc.getText();
-    const job = note.session.start(text, note.pendingOverflow ? undefined : note.pending);
-    const running = { job, version: note.doc.version, pendingCount: note.pending.length, busyMs: 0 };
+    const version = note.doc.version;
+    const pendingCount = note.pending.length;
+    const changes = note.pendingOverflow ? undefined : note.pending.slice();
+    note.parse = undefined;
+    if (isLarge(note) && this.parser.available() && note.session.needsFullParse(text, changes)) {
+      const marker = { version };
+      note.parse = marker;
+      const current = () => this.notes.get(uri) === note && note.parse === marker;
+      this.parser.parse(uri, text).then(
+        (blocks) => {
+          if (!current()) return;
+          note.parse = undefined;
+          // Skipped: a newer text of this note is being parsed and will be evaluated.
+          if (blocks)
+            this.runJob(uri, note, note.session.start(text, changes, blocks), version, pendingCount);
+        },
+        (e: Error) => {
+          if (!current()) return;
+          note.parse = undefined;
+          // Parsing here what the worker could not would risk the server itself (its memory):
+          // only a note of moderate size is parsed here instead.
+          const here = text.length <= MAIN_THREAD_PARSE_CHARS;
+          this.host.onError(
+            `parse of ${uri} on the worker failed (${e.message})${here ? ': parsing it here' : ': it is not evaluated'}`,
+          );
+          if (here) this.runJob(uri, note, note.session.start(text, changes), version, pendingCount);
+        },
+      );
+      return;
+    }
+    this.runJob(uri, note, note.session.start(text, changes), version, pendingCount);
+  }
+
+  /** Evaluate in slices of `SLICE_MS`, then commit (dropped when a newer version takes over). */
+  private runJob(uri: string, note: OpenNote, job: SessionJob, version: number, pendingCount: number): void {
+    const running = { job, version, pendingCount, busyMs: 0 };
     note.job = running;
     const slice = () => {
       // A newer version, a close or a synchronous finish took over: drop this work.
@@ -183,6 +239,7 @@ export class NoteDocuments {
       clearTimeout(note.timer);
       note.timer = undefined;
     }
+    note.parse = undefined;
     if (!note.job || note.job.version !== note.doc.version || note.job.job.closed) {
       const text = note.doc.getText();
       const job = note.session.start(text, note.pendingOverflow ? undefined : note.pending);
@@ -217,4 +274,8 @@ export class NoteDocuments {
     if (running.version !== note.doc.version && !note.timer) this.schedule(uri, 0);
     return result;
   }
+}
+
+function isLarge(note: OpenNote): boolean {
+  return note.doc.getText().length >= LARGE_NOTE_CHARS;
 }

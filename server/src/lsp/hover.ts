@@ -6,6 +6,7 @@
  */
 import {
   type CheckResult,
+  DIM_LABEL,
   type Diagnostic,
   findMaterial,
   formatNumber,
@@ -14,7 +15,6 @@ import {
   type Position,
   type Value,
 } from '@fatigue-notes/core';
-import { DIM_LABEL } from '@fatigue-notes/core';
 import { type Hover, MarkupKind, type Range } from 'vscode-languageserver/node';
 import { checkAt, checkById, contains, type NoteView, statementOn, type Word, wordAt } from './locate';
 

@@ -10,8 +10,8 @@ import {
   parseLine,
   type Range,
   type Statement,
+  stripComment,
 } from '@fatigue-notes/core';
-import { stripComment } from '@fatigue-notes/core';
 import type { FatigueSettings } from './settings';
 
 /** One evaluated version of an open note, as the features see it. */

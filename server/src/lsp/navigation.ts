@@ -4,8 +4,15 @@
  * statements and every `id.name` elsewhere in the note). Reserved names are the block
  * language's vocabulary and are not renamed.
  */
-import { type CheckResult, INPUT_NAMES, type Position, type Range, RESULT_NAMES } from '@fatigue-notes/core';
-import { ID_PATTERN, stripComment } from '@fatigue-notes/core';
+import {
+  type CheckResult,
+  ID_PATTERN,
+  INPUT_NAMES,
+  type Position,
+  type Range,
+  RESULT_NAMES,
+  stripComment,
+} from '@fatigue-notes/core';
 import type { Location, TextEdit, WorkspaceEdit } from 'vscode-languageserver/node';
 import { checkAt, checkById, contains, isContentLine, type NoteView, statementOn, wordAt } from './locate';
 

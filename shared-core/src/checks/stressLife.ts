@@ -19,6 +19,7 @@ import { biaxialVonMises } from '../stress/biaxial';
 import { concentration } from './concentration';
 import { chooseCriterion, needsYield, strengthSetFor } from './criterionChoice';
 import { enduranceChain, type LoadKind } from './enduranceChain';
+import { lazyField } from './lazyField';
 import { active, nominalStresses } from './loads';
 import { readStrengths } from './material';
 import type { MethodExtras } from './runMethod';
@@ -198,17 +199,21 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
       // The chosen criterion's domain notes are reported once, on n_f.
       ctx.result(name, { ...c, notes: [] }, needsSy(k) ? [...inputs, 'Sy'] : inputs, { range: critRange });
     }
-    haigh = {
-      S,
-      Sut: chain.Su,
-      Sy: set.Sy,
-      shear: chain.shear,
-      sigma_a: sa,
-      sigma_m: sm,
-      loadLine: lineOpt,
-      criterion,
-      n_f: ctx.values.n_f?.si ?? null,
-      curves: [
+    // The curves are computed when a diagram first reads them (lazyField.ts).
+    haigh = lazyField<HaighData, 'curves'>(
+      {
+        S,
+        Sut: chain.Su,
+        Sy: set.Sy,
+        shear: chain.shear,
+        sigma_a: sa,
+        sigma_m: sm,
+        loadLine: lineOpt,
+        criterion,
+        n_f: ctx.values.n_f?.si ?? null,
+      },
+      'curves',
+      () => [
         ...COMPARED.filter(([k]) => !(needsSy(k) && Sy === undefined)).map(([k]) => ({
           key: k,
           label: criterionModel(k).label,
@@ -218,7 +223,7 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
           ? [{ key: 'langer', label: 'Langer (first-cycle yield)', points: langerLine(set.Sy) }]
           : []),
       ],
-    };
+    );
   }
 
   // Equivalent fully reversed stress and life.

@@ -252,6 +252,15 @@ export class CheckContext {
 
 /** A method's formula names its own symbol (`n_f = ...`); the record shows the value's name. */
 function renameFormula(formula: string, name: string): string {
+  // Most formulas already start with `name =` or `name ` (no regex needed then).
+  if (formula.startsWith(name)) {
+    const c = formula.charCodeAt(name.length);
+    if (c === 32 || c === 61) {
+      let i = name.length;
+      while (formula.charCodeAt(i) === 32) i++;
+      if (formula.charCodeAt(i) === 61 && formula.charCodeAt(i + 1) !== 61) return formula;
+    }
+  }
   const m = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s*=(?!=)/.exec(formula);
   if (!m || m[1] === name) return formula;
   return `${name} =${formula.slice(m[0].length)}`;

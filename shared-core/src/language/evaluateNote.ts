@@ -4,13 +4,14 @@
  * whatever goes wrong inside one check becomes a diagnostic of that check.
  */
 import { runCheckMethod } from '../checks/runMethod';
-import { solveBlock } from '../design/solve';
 import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import type { UnitSystem } from '../units/format';
 import type { Unit } from '../units/mathInstance';
+import { limitBlocks } from './budgets';
 import { CheckContext, type HistoryChunkReader, type StatedInput } from './checkContext';
 import { ExpressionError, evaluateExpression, type Quantity, rawFromSI, type Scope } from './expressions';
 import { type BlockSource, findFatigueBlocks, ID_PATTERN, splitLines } from './markdownBlocks';
+import { BlockSequence } from './noteLoop';
 import { evaluateRequirements } from './requirements';
 import { type AssignStatement, type OptionStatement, parseStatements, type Statement } from './statements';
 import { type CheckResult, type Diagnostic, lineRange, type Method, type NoteResult, range } from './types';
@@ -25,6 +26,11 @@ export interface EvaluateOptions {
   histories?: HistoryChunkReader;
   /** Per-lint switches by diagnostic code (false turns a lint off). */
   lints?: Record<string, boolean>;
+  /**
+   * Milliseconds a check may spend reading its history files (the language server sets it;
+   * unset, as in the command line, reads to the end). See `historyBudget.ts`.
+   */
+  historyBudgetMs?: number;
 }
 
 /** Raw mathjs values of a finished check, for `check.name` references in later checks. */
@@ -35,26 +41,15 @@ export interface CheckScopeEntry {
 
 export function evaluateNote(text: string, options: EvaluateOptions = {}): NoteResult {
   const lines = splitLines(text);
-  const blocks = findFatigueBlocks(text, lines);
-  const noteSystem = options.unitSystem && options.unitSystem !== 'auto' ? options.unitSystem : undefined;
-  const previous = new Map<string, CheckScopeEntry>();
+  const blocks = limitBlocks(findFatigueBlocks(text, lines));
+  const sequence = new BlockSequence(options);
   const checks: CheckResult[] = [];
-  const seenIds = new Map<string, BlockSource>();
-  for (const block of blocks) {
-    const blockOptions: EvaluateOptions = { ...options, unitSystem: noteSystem ?? 'auto' };
-    // Design mode (`solve:`) evaluates the block again per trial value; trials leave `seenIds` alone.
-    const entry = solveBlock(block, previous, (inject, trial) =>
-      evaluateBlock(block, previous, trial ? new Map(seenIds) : seenIds, blockOptions, inject),
-    );
-    checks.push(entry.result);
-    if (entry.result.id && !previous.has(entry.result.id)) previous.set(entry.result.id, entry);
-  }
   const diagnostics: Diagnostic[] = [];
-  for (const c of checks) diagnostics.push(...c.diagnostics);
-  if (options.lints) {
-    const off = options.lints;
-    for (const c of checks) c.diagnostics = c.diagnostics.filter((d) => off[d.code] !== false);
-    return { checks, diagnostics: diagnostics.filter((d) => off[d.code] !== false) };
+  for (let i = 0; i < blocks.length; i++) {
+    const entry = sequence.evaluate(blocks[i], i);
+    sequence.add(entry);
+    checks.push(entry.result);
+    for (const d of entry.result.diagnostics) diagnostics.push(d);
   }
   return { checks, diagnostics };
 }
@@ -378,7 +373,8 @@ export function memberValue(entry: CheckScopeEntry | undefined, name: string): U
   if (!entry) return undefined;
   const hit = entry.raw.get(name);
   if (hit !== undefined) return hit;
-  const v = entry.result.values[name];
+  const values = entry.result.values;
+  const v = Object.hasOwn(values, name) ? values[name] : undefined;
   if (!v || v.si === null) return undefined;
   const vec = vectorOf(v.dim);
   if (!vec) return undefined;

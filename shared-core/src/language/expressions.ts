@@ -58,6 +58,11 @@ export interface CompiledExpression {
   members: Array<{ check: string; member: string }>;
   /** The unit text when the expression is exactly `number unit...`. */
   statedUnit?: string;
+  /**
+   * The outcome of an expression that reads nothing of its scope (`630 MPa`, `2 * 3 ksi`),
+   * computed once when it is compiled: its quantity, or the error it raises.
+   */
+  constant?: { q: Quantity } | { error: ExpressionError };
 }
 
 const FUNCTIONS: Record<string, (...args: unknown[]) => unknown> = {
@@ -101,6 +106,7 @@ export function compileExpression(text: string): CompiledExpression {
   const hit = cache.get(text);
   if (hit) return hit;
   const compiled = compileFresh(text);
+  foldConstant(compiled);
   if (cache.size > 20_000) cache.clear();
   cache.set(text, compiled);
   return compiled;
@@ -181,7 +187,7 @@ function build(
       const name = (node as unknown as { name: string }).name;
       const unit = unitNamed(name);
       if (unitPosition && unit) return () => unit;
-      if (name in CONSTANTS && !unit) {
+      if (Object.hasOwn(CONSTANTS, name) && !unit) {
         const c = CONSTANTS[name];
         return (scope) => scope.get(name) ?? c;
       }
@@ -239,7 +245,7 @@ function build(
     case 'FunctionNode': {
       const fnNode = node as unknown as { fn: MathNode; args: MathNode[] };
       const fname = fnNode.fn.type === 'SymbolNode' ? (fnNode.fn as unknown as { name: string }).name : '';
-      const impl = FUNCTIONS[fname];
+      const impl = Object.hasOwn(FUNCTIONS, fname) ? FUNCTIONS[fname] : undefined;
       if (!impl)
         throw new ExpressionError(
           'function-not-allowed',
@@ -263,7 +269,7 @@ function build(
         const b = build(op.args[1], true, text, names, members);
         return (s) => math.to(a(s) as Unit, b(s) as Unit);
       }
-      const impl = BINARY[op.fn];
+      const impl = Object.hasOwn(BINARY, op.fn) ? BINARY[op.fn] : undefined;
       if (!impl || op.args.length !== 2)
         throw new ExpressionError('operator-not-allowed', `operator \`${op.op}\` is not allowed in a note`);
       const leftIsChain = isUnitChain(op.args[0]);
@@ -328,12 +334,24 @@ export function toQuantity(v: unknown): Quantity {
 /** Compile (cached) and run an expression. */
 export function evaluateExpression(text: string, scope: Scope): Quantity {
   const c = compileExpression(text);
+  const k = c.constant;
+  if (k) {
+    if ('error' in k) throw k.error;
+    // A copy: callers may set fields of their quantity; the mathjs value is never mutated.
+    return { ...k.q };
+  }
+  return runCompiled(c, scope);
+}
+
+function runCompiled(c: CompiledExpression, scope: Scope): Quantity {
   let v: unknown;
   try {
     v = c.run(scope);
   } catch (e) {
     if (e instanceof ExpressionError) throw e;
     const msg = e instanceof Error ? e.message : String(e);
+    if (/unit with undefined value|valueless/i.test(msg))
+      throw new ExpressionError('missing-number', 'a unit without a number: write e.g. `35 mm`, and `2 * 35 mm` rather than `mm * 2`');
     if (/Units do not match|dimension/i.test(msg))
       throw new ExpressionError('wrong-dimension', `units do not add up: ${msg}`);
     throw new ExpressionError('expression-error', `cannot evaluate: ${msg}`);
@@ -341,6 +359,34 @@ export function evaluateExpression(text: string, scope: Scope): Quantity {
   const q = toQuantity(v);
   if (c.statedUnit) q.statedUnit = c.statedUnit;
   return q;
+}
+
+/**
+ * Run the expression once against a scope that records any use: when it never asks for a
+ * name, a reference or a check, its outcome is the same in every note and is kept.
+ */
+function foldConstant(c: CompiledExpression): void {
+  let touched = false;
+  const probe: Scope = {
+    get: () => {
+      touched = true;
+      return undefined;
+    },
+    member: () => {
+      touched = true;
+      return undefined;
+    },
+    hasCheck: () => {
+      touched = true;
+      return false;
+    },
+  };
+  try {
+    const q = runCompiled(c, probe);
+    if (!touched) c.constant = { q };
+  } catch (e) {
+    if (!touched && e instanceof ExpressionError) c.constant = { error: e };
+  }
 }
 
 /** A mathjs value for an SI number of a given dimension (to put a computed result back into a scope). */

@@ -7,6 +7,7 @@
 import type { Code, Root, RootContent } from 'mdast';
 import remarkParse from 'remark-parse';
 import { unified } from 'unified';
+import { nestsTooDeep, scanFatigueFences } from './fenceScan';
 
 export const ID_PATTERN = /^[A-Za-z_][A-Za-z0-9_]*$/;
 
@@ -33,6 +34,12 @@ export interface BlockSource {
   openLineLength: number;
   /** Content lines, with their document line numbers. */
   lines: SourceLine[];
+  /**
+   * Set on the first block when the note's blocks were found by the line scan of
+   * `fenceScan.ts` instead of the Markdown parser: nesting deeper than the parser is given,
+   * or a parser failure. The evaluator reports it on that block.
+   */
+  fallback?: 'nesting' | 'parser';
 }
 
 const parser = unified().use(remarkParse);
@@ -43,29 +50,49 @@ export function splitLines(text: string): string[] {
 }
 
 export function findFatigueBlocks(text: string, lines: string[] = splitLines(text)): BlockSource[] {
+  if (nestsTooDeep(lines)) return scanned(lines, 'nesting');
   let tree: Root;
   try {
     tree = parser.parse(text) as Root;
   } catch {
-    return [];
+    // A parser failure (e.g. its stack) must not hide the note's checks: scan the lines instead.
+    return scanned(lines, 'parser');
   }
   const out: BlockSource[] = [];
-  const visit = (node: Root | RootContent): void => {
+  // Depth-first, in document order, without recursion (a deep tree must not exhaust the stack).
+  const stack: Array<Root | RootContent> = [tree];
+  while (stack.length > 0) {
+    const node = stack.pop()!;
     if (node.type === 'code') {
       const b = fromCode(node, lines);
       if (b) out.push(b);
-      return;
+      continue;
     }
-    if ('children' in node) for (const c of node.children as RootContent[]) visit(c);
-  };
-  visit(tree);
+    if ('children' in node) {
+      const children = node.children as RootContent[];
+      for (let i = children.length - 1; i >= 0; i--) stack.push(children[i]);
+    }
+  }
+  return out;
+}
+
+function scanned(lines: string[], why: 'nesting' | 'parser'): BlockSource[] {
+  const out: BlockSource[] = [];
+  for (const { open, last } of scanFatigueFences(lines)) {
+    const b = blockAt(lines, open, last);
+    if (b) out.push(b);
+  }
+  if (out.length > 0) out[0].fallback = why;
   return out;
 }
 
 function fromCode(node: Code, lines: string[]): BlockSource | null {
   if (node.lang !== 'fatigue' || !node.position) return null;
-  const openLine = node.position.start.line - 1;
-  const lastLine = node.position.end.line - 1;
+  return blockAt(lines, node.position.start.line - 1, node.position.end.line - 1);
+}
+
+/** The block whose fence opens on `openLine` and whose last line (closing fence or not) is `lastLine`. */
+function blockAt(lines: string[], openLine: number, lastLine: number): BlockSource | null {
   const opening = lines[openLine] ?? '';
   const fence = /^(\s*(?:>\s*)*)(`{3,}|~{3,})/.exec(opening);
   // An indented code block whose first word is `fatigue` is not a fence.

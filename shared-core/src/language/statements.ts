@@ -80,6 +80,24 @@ export type Statement =
 
 const NAME = /^[A-Za-z_][A-Za-z0-9_]*$/;
 
+/**
+ * Names every JavaScript object answers to (`constructor`, `__proto__`, `toString` ...):
+ * a note may not use them, so that no lookup of a note's name can reach the runtime.
+ */
+export function isReservedWord(name: string): boolean {
+  return name in Object.prototype;
+}
+
+function reserved(line: number, name: Span): BadStatement {
+  return {
+    kind: 'bad',
+    line,
+    code: 'reserved-name',
+    message: `\`${name.text}\` cannot be a name in a note (it is reserved): choose another name`,
+    range: name.range,
+  };
+}
+
 function span(line: number, text: string, start: number): Span {
   return { text, range: lineRange(line, start, start + text.length) };
 }
@@ -169,6 +187,7 @@ export function parseLine(line: number, text: string, base = 0): Statement | nul
         message: `\`${name.text}\` cannot be assigned here: a check may only state its own names (no \`check.name =\`)`,
         range: name.range,
       };
+    if (isReservedWord(name.text)) return reserved(line, name);
     const expr = trimmed(line, body.slice(asg[0].length), start + asg[0].length);
     if (expr.text === '')
       return {
@@ -207,6 +226,7 @@ function parseRequire(line: number, rest: string, offset: number, whole: Range):
     }
     const symStart = offset + off + piece.indexOf(m[1]);
     const exprStartInPiece = piece.length - m[3].length;
+    if (isReservedWord(m[1])) return reserved(line, span(line, m[1], symStart));
     items.push({
       symbol: span(line, m[1], symStart),
       op: m[2] as RequireItem['op'],
@@ -232,6 +252,8 @@ function parseSolve(line: number, rest: string, offset: number, whole: Range): S
   const nameStart = offset + rest.indexOf(m[1]);
   const symStart = offset + rest.indexOf(m[2], rest.indexOf(m[1]) + m[1].length + 4);
   const exprStart = offset + rest.length - m[3].length;
+  if (isReservedWord(m[1])) return reserved(line, span(line, m[1], nameStart));
+  if (isReservedWord(m[2])) return reserved(line, span(line, m[2], symStart));
   return {
     kind: 'solve',
     line,
@@ -258,6 +280,7 @@ function parseSpectrum(line: number, rest: string, offset: number, whole: Range)
       };
     }
     const nameStart = offset + off + piece.indexOf(m[1]);
+    if (isReservedWord(m[1])) return reserved(line, span(line, m[1], nameStart));
     items.push({
       name: span(line, m[1], nameStart),
       expr: trimmed(line, m[2], offset + off + piece.length - m[2].length),

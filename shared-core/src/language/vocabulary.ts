@@ -10,7 +10,16 @@ export interface NameInfo {
   meaning: string;
 }
 
-export const INPUT_NAMES: Record<string, NameInfo> = {
+/**
+ * A table without `Object.prototype` behind it: `name in TABLE` and `TABLE[name]` answer for
+ * the table's own words only, never for `constructor`, `__proto__` or `toString` (a note is
+ * untrusted input, issue 7).
+ */
+function ownWords<T>(table: Record<string, T>): Record<string, T> {
+  return Object.assign(Object.create(null) as Record<string, T>, table);
+}
+
+export const INPUT_NAMES: Record<string, NameInfo> = ownWords({
   Sut: { dim: 'stress', meaning: 'ultimate tensile strength' },
   Sy: { dim: 'stress', meaning: 'tensile yield strength' },
   Se_prime: { dim: 'stress', meaning: 'endurance limit of the polished rotating-beam specimen' },
@@ -75,9 +84,9 @@ export const INPUT_NAMES: Record<string, NameInfo> = {
   sigma_max: { dim: 'stress', meaning: 'largest stress of the cycle' },
   sigma_min: { dim: 'stress', meaning: 'smallest stress of the cycle' },
   inspection_factor: { dim: 'one', meaning: 'divisor from crack-growth life to inspection interval' },
-};
+});
 
-export const RESULT_NAMES: Record<string, NameInfo> = {
+export const RESULT_NAMES: Record<string, NameInfo> = ownWords({
   Se: { dim: 'stress', meaning: 'corrected endurance limit (Marin)' },
   S_ref: { dim: 'stress', meaning: 'corrected fatigue strength at the reference life (no endurance limit)' },
   Sf_ref: { dim: 'stress', meaning: 'rotating-beam fatigue strength at the reference life (library)' },
@@ -110,7 +119,7 @@ export const RESULT_NAMES: Record<string, NameInfo> = {
   N_cg: { dim: 'one', meaning: 'crack-growth cycles from a_i to a_c' },
   N_insp: { dim: 'one', meaning: 'inspection interval in cycles' },
   cycles_counted: { dim: 'one', meaning: 'cycles counted in one pass of the history' },
-};
+});
 
 export interface OptionInfo {
   meaning: string;
@@ -119,7 +128,7 @@ export interface OptionInfo {
   default?: string;
 }
 
-export const OPTIONS: Record<string, OptionInfo> = {
+const OPTION_TABLE: Record<string, OptionInfo> = {
   title: { meaning: 'title of the check (free text)' },
   material: { meaning: 'a key of the material library (strengths, class, source)' },
   surface: {
@@ -244,6 +253,12 @@ export const OPTIONS: Record<string, OptionInfo> = {
     default: 'constant',
   },
 };
+
+export const OPTIONS: Record<string, OptionInfo> = ownWords(
+  Object.fromEntries(
+    Object.entries(OPTION_TABLE).map(([k, v]) => [k, v.values ? { ...v, values: ownWords(v.values) } : v]),
+  ),
+);
 
 export function nameInfo(name: string): NameInfo | undefined {
   return INPUT_NAMES[name] ?? RESULT_NAMES[name];

@@ -27,9 +27,11 @@
  * Work is split in steps (one block evaluated per step) so that a caller can interleave
  * other work and abandon a stale update: nothing is committed until `finish()`.
  */
-import { solveBlock } from '../design/solve';
-import { type CheckScopeEntry, type EvaluateOptions, evaluateBlock } from '../language/evaluateNote';
-import { type BlockSource, findFatigueBlocks, ID_PATTERN, splitLines } from '../language/markdownBlocks';
+import { limitBlocks } from '../language/budgets';
+import type { CheckScopeEntry, EvaluateOptions } from '../language/evaluateNote';
+import { MAX_NESTING, nestingOf } from '../language/fenceScan';
+import { type BlockSource, findFatigueBlocks, splitLines } from '../language/markdownBlocks';
+import { type BlockHead, BlockSequence } from '../language/noteLoop';
 import type { CheckResult, Diagnostic, NoteResult, Range } from '../language/types';
 
 /** One content change, as LSP sends them (applied in order; ranges refer to the text at that point). */
@@ -49,9 +51,6 @@ export interface UpdateStats {
   /** Lines added (negative: removed) above the blocks that moved. */
   lineDelta: number;
 }
-
-/** A block's place in the note, without its lines (they are read from the note's lines when needed). */
-type BlockHead = Omit<BlockSource, 'lines'>;
 
 interface BlockEntry {
   head: BlockHead;
@@ -79,12 +78,24 @@ const FENCE_LIKE = /^[ \t]*(`{3,}|~{3,})/;
 const TOP_LEVEL_FENCE = /^(`{3,}|~{3,})/;
 const REF = /([A-Za-z_][A-Za-z0-9_]*)(?=\s*\.)/g;
 const CITES_LINE = /\blines? \d/;
-const NO_LINES: BlockSource['lines'] = [];
 
 const now: () => number =
   typeof globalThis.performance?.now === 'function' ? () => globalThis.performance.now() : () => 0;
 
+interface LineDiff {
+  newLines: string[];
+  hasCR: boolean;
+  /** End (exclusive) of the changed lines in the old and in the new text. */
+  oldEnd: number;
+  newEnd: number;
+}
+
+/** How an update is classified, with the line diff it was classified on. */
+type Planned = ({ kind: 'block'; index: number } | { kind: 'prose' | 'unchanged' | 'full' }) &
+  Partial<LineDiff>;
+
 export class NoteSession {
+  private planned?: { text: string; base: string[]; changes?: readonly TextChange[]; plan: Planned };
   private text = '';
   private lines: string[] = [''];
   private hasCR = false;
@@ -93,12 +104,8 @@ export class NoteSession {
   private generation = 0;
   private evaluatedOnce = false;
   private stats: UpdateStats = { kind: 'unchanged', evaluated: 0, blocks: 0, lineDelta: 0 };
-  private readonly blockOptions: EvaluateOptions;
 
-  constructor(private readonly options: EvaluateOptions = {}) {
-    const noteSystem = options.unitSystem && options.unitSystem !== 'auto' ? options.unitSystem : undefined;
-    this.blockOptions = { ...options, unitSystem: noteSystem ?? 'auto' };
-  }
+  constructor(private readonly options: EvaluateOptions = {}) {}
 
   /** Bring the session to `text` and return its result (equal to `evaluateNote(text, options)`). */
   update(text: string, changes?: readonly TextChange[]): NoteResult {
@@ -146,29 +153,57 @@ export class NoteSession {
     this.current = { checks: [], diagnostics: [] };
   }
 
-  /** Plan an update; nothing changes in the session until the job's `finish()`. */
-  start(text: string, changes?: readonly TextChange[]): SessionJob {
+  /**
+   * Whether `start(text, changes)` would parse the whole note (an update of kind `full`). A host
+   * may then find the blocks elsewhere (the language server parses large notes on another
+   * thread) and hand them to `start`. The classification is kept for the `start` that follows.
+   */
+  needsFullParse(text: string, changes?: readonly TextChange[]): boolean {
+    return this.plan(text, changes).kind === 'full';
+  }
+
+  private plan(text: string, changes?: readonly TextChange[]): Planned {
+    const cached = this.planned;
+    if (cached && cached.text === text && cached.base === this.lines && cached.changes === changes)
+      return cached.plan;
+    let plan: Planned;
+    if (this.evaluatedOnce && text === this.text) plan = { kind: 'unchanged' };
+    else {
+      const fromChanges = changes && changes.length > 0 ? this.applyChanges(text, changes) : undefined;
+      const newLines = fromChanges ?? splitFast(text);
+      const hasCR = fromChanges ? false : text.includes('\r');
+      const old = this.lines;
+      // Lines unchanged at the start and at the end.
+      const max = Math.min(old.length, newLines.length);
+      let p = 0;
+      while (p < max && old[p] === newLines[p]) p++;
+      let s = 0;
+      while (s < max - p && old[old.length - 1 - s] === newLines[newLines.length - 1 - s]) s++;
+      const oldEnd = old.length - s;
+      const newEnd = newLines.length - s;
+      plan = { ...this.classify(newLines, p, oldEnd, newEnd), newLines, hasCR, oldEnd, newEnd };
+    }
+    this.planned = { text, base: this.lines, changes, plan };
+    return plan;
+  }
+
+  /**
+   * Plan an update; nothing changes in the session until the job's `finish()`. `blocks`: the
+   * note's blocks found elsewhere for exactly this text, used when the whole note must be parsed.
+   */
+  start(text: string, changes?: readonly TextChange[], blocks?: ReadonlyArray<BlockHead>): SessionJob {
     const generation = ++this.generation;
-    if (this.evaluatedOnce && text === this.text) {
+    const planned = this.plan(text, changes);
+    this.planned = undefined;
+    if (planned.kind === 'unchanged' && !('newLines' in planned)) {
       const heads = this.entries.map((e) => e.head);
       return this.makeJob(generation, text, this.lines, this.hasCR, 'unchanged', heads, new Set(), 0, 0);
     }
-    const fromChanges = changes && changes.length > 0 ? this.applyChanges(text, changes) : undefined;
-    const newLines = fromChanges ?? splitFast(text);
-    const hasCR = fromChanges ? false : text.includes('\r');
-    const old = this.lines;
-    // Lines unchanged at the start and at the end.
-    const max = Math.min(old.length, newLines.length);
-    let p = 0;
-    while (p < max && old[p] === newLines[p]) p++;
-    let s = 0;
-    while (s < max - p && old[old.length - 1 - s] === newLines[newLines.length - 1 - s]) s++;
-    const oldEnd = old.length - s;
-    const newEnd = newLines.length - s;
+    const { newLines, hasCR, oldEnd, newEnd } = planned as Planned & { newLines: string[] } & LineDiff;
     const delta = newEnd - oldEnd;
-    const plan = this.classify(newLines, p, oldEnd, newEnd);
+    const plan = planned;
     if (plan.kind === 'full') {
-      const heads = findFatigueBlocks(text, newLines).map(toHead);
+      const heads = limitBlocks(blocks ?? findFatigueBlocks(text, newLines)).map(toHead);
       return this.makeJob(generation, text, newLines, hasCR, 'full', heads, null, 0, 0);
     }
     // Heads after the changed lines move by `delta`.
@@ -235,8 +270,11 @@ export class NoteSession {
     // First update (or after reset): nothing to reuse.
     if (!this.evaluatedOnce) return { kind: 'full' };
     if (p === oldEnd && p === newEnd) return { kind: 'unchanged' };
-    for (let l = p; l < oldEnd; l++) if (FENCE_LIKE.test(old[l])) return { kind: 'full' };
-    for (let l = p; l < newEnd; l++) if (FENCE_LIKE.test(newLines[l])) return { kind: 'full' };
+    for (let l = p; l < oldEnd; l++) if (FENCE_LIKE.test(old[l]) || isDeep(old[l])) return { kind: 'full' };
+    for (let l = p; l < newEnd; l++)
+      if (FENCE_LIKE.test(newLines[l]) || isDeep(newLines[l])) return { kind: 'full' };
+    // Blocks found by the line scan (nesting too deep for the Markdown parser): no partial parse.
+    if (this.entries[0]?.head.fallback) return { kind: 'full' };
     const heads = this.entries.map((e) => e.head);
     // Last block that opens before the first changed line.
     let lo = 0;
@@ -294,8 +332,9 @@ export class NoteSession {
     const session = this;
     const oldEntries = this.entries;
     const next: BlockEntry[] = [];
-    const previous = new Map<string, CheckScopeEntry>();
-    const seenIds = new Map<string, BlockSource>();
+    // The loop over blocks shared with `evaluateNote` (budgets, design mode, lint switches).
+    const sequence = new BlockSequence(session.options);
+    const previous = sequence.previous;
     const dirty = new Set<string>();
     let evaluated = 0;
     let i = 0;
@@ -306,25 +345,15 @@ export class NoteSession {
       const head = newHeads[index];
       const source = sourceOf(head, lines);
       const t0 = now();
-      const scope = solveBlock(source, previous, (inject, trial) =>
-        evaluateBlock(source, previous, trial ? new Map(seenIds) : seenIds, session.blockOptions, inject),
-      );
+      const scope = sequence.evaluate(source, index);
       const ms = now() - t0;
-      const lints = session.options.lints;
-      if (lints) scope.result.diagnostics = scope.result.diagnostics.filter((d) => lints[d.code] !== false);
       evaluated++;
       ownRanges(scope.result);
       return { head, scope, refs: refsOf(source), citesLines: citesLines(scope.result), ms };
     };
 
     const register = (entry: BlockEntry, reused: boolean): void => {
-      if (reused) {
-        const id = entry.head.id;
-        if (id && ID_PATTERN.test(id) && !seenIds.has(id))
-          seenIds.set(id, { ...entry.head, lines: NO_LINES });
-      }
-      const rid = entry.scope.result.id;
-      if (rid && !previous.has(rid)) previous.set(rid, entry.scope);
+      sequence.add(entry.scope, reused ? entry.head : undefined);
       next.push(entry);
     };
 
@@ -394,7 +423,8 @@ export class NoteSession {
   }
 }
 
-function toHead(b: BlockSource): BlockHead {
+function toHead(b: BlockHead & { lines?: unknown }): BlockHead {
+  if (!('lines' in b)) return b;
   const { lines: _lines, ...head } = b;
   return head;
 }
@@ -409,6 +439,11 @@ function sourceOf(head: BlockHead, lines: string[]): BlockSource {
   const content: BlockSource['lines'] = [];
   for (let l = head.openLine + 1; l <= contentEnd; l++) content.push({ line: l, text: lines[l] ?? '' });
   return { ...head, lines: content };
+}
+
+/** A line that may nest deeper than the Markdown parser is given (see `fenceScan.ts`). */
+function isDeep(line: string): boolean {
+  return line.length > MAX_NESTING && nestingOf(line) > MAX_NESTING;
 }
 
 function splitFast(text: string): string[] {

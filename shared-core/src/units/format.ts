@@ -62,8 +62,13 @@ export function formatNumber(x: number, digits = 4): string {
   return trimZeros(x.toFixed(decimals));
 }
 
+/** `1.2500` -> `1.25`, `3.000` -> `3`, `120` stays (the same as `s.replace(/\.?0+$/, '')` on a decimal). */
 function trimZeros(s: string): string {
-  return s.includes('.') ? s.replace(/\.?0+$/, '') : s;
+  if (s.indexOf('.') < 0) return s;
+  let end = s.length;
+  while (end > 0 && s.charCodeAt(end - 1) === 48) end--;
+  if (end > 0 && s.charCodeAt(end - 1) === 46) end--;
+  return end === s.length ? s : s.slice(0, end);
 }
 
 export function formatValue(si: number, dim: DimKey, system: UnitSystem, digits = 4): string {

@@ -266,3 +266,69 @@ describe('NoteSession', () => {
     expect(s.update(text, [wrong])).toStrictEqual(evaluateNote(text));
   });
 });
+
+describe('NoteSession on CRLF notes and notes with a byte-order mark (issue 7)', () => {
+  const variants: Array<[string, string]> = [
+    ['CRLF', NOTE.replace(/\n/g, '\r\n')],
+    ['a byte-order mark', `\uFEFF${NOTE}`],
+    ['a byte-order mark and CRLF', `\uFEFF${NOTE.replace(/\n/g, '\r\n')}`],
+  ];
+  for (const [name, base] of variants) {
+    it(`stays equal to evaluateNote over random edit sequences of a note with ${name} (fast-check; reference: evaluateNote)`, () => {
+      fc.assert(
+        fc.property(fc.array(editArb, { minLength: 1, maxLength: 5 }), (edits) => {
+          const s = new NoteSession();
+          let text = base;
+          expect(s.update(text)).toStrictEqual(evaluateNote(text));
+          for (const e of edits) {
+            const { next, change } = apply(text, e);
+            expect(s.update(next, e.hint ? [change] : undefined)).toStrictEqual(evaluateNote(next));
+            text = next;
+          }
+        }),
+        { numRuns: 25 },
+      );
+    });
+  }
+
+  it('a CRLF note and its LF twin give the same ranges after the same edit', () => {
+    const crlf = NOTE.replace(/\n/g, '\r\n');
+    const s = new NoteSession();
+    s.update(crlf);
+    const edited = crlf.replace('d = 35 mm', 'd = 36 mm');
+    expect(s.update(edited)).toStrictEqual(evaluateNote(NOTE.replace('d = 35 mm', 'd = 36 mm')));
+  });
+});
+
+describe('NoteSession and evaluateNote share one loop over blocks', () => {
+  const SOLVE = [
+    '```fatigue sized',
+    'Sut = 630 MPa',
+    'Sy = 530 MPa',
+    'surface: machined',
+    'feature: shoulder-fillet',
+    'D = 1.2 * d',
+    'r = 0.05 * d',
+    'M_max = 180 N*m',
+    'M_min = -180 N*m',
+    'criterion: goodman',
+    'solve: d for n_f = 1.5',
+    '```',
+    '',
+    '```fatigue after',
+    'Sut = sized.Sut',
+    'd = sized.d',
+    'M_a = 50 N*m',
+    '```',
+    '',
+  ].join('\n');
+
+  it('a design-mode block (solve:) gives in the session what evaluateNote gives, before and after an edit', () => {
+    const s = new NoteSession({ lints: { 'missing-id': false } });
+    expect(s.update(SOLVE)).toStrictEqual(evaluateNote(SOLVE, { lints: { 'missing-id': false } }));
+    expect(s.result().checks[0].values.d.origin).toBe('computed');
+    const edited = SOLVE.replace('M_max = 180 N*m', 'M_max = 200 N*m');
+    expect(s.update(edited)).toStrictEqual(evaluateNote(edited, { lints: { 'missing-id': false } }));
+    expect(s.lastUpdate()).toMatchObject({ kind: 'block', evaluated: 2 });
+  });
+});
