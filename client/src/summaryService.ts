@@ -8,7 +8,7 @@ import { SECTION } from './settings';
 import { SUMMARY_REQUEST, type SummaryCheck, type SummaryParams, type SummaryResult } from './summary';
 
 /** Pause after the last keystroke before asking again (the panel must follow within 300 ms). */
-export const TYPING_PAUSE_MS = 150;
+export const TYPING_PAUSE_MS = 60;
 
 export interface SummaryState {
   /** The note shown, or undefined when no Markdown note has been opened yet. */
