@@ -351,7 +351,10 @@ function runCompiled(c: CompiledExpression, scope: Scope): Quantity {
     if (e instanceof ExpressionError) throw e;
     const msg = e instanceof Error ? e.message : String(e);
     if (/unit with undefined value|valueless/i.test(msg))
-      throw new ExpressionError('missing-number', 'a unit without a number: write e.g. `35 mm`, and `2 * 35 mm` rather than `mm * 2`');
+      throw new ExpressionError(
+        'missing-number',
+        'a unit without a number: write e.g. `35 mm`, and `2 * 35 mm` rather than `mm * 2`',
+      );
     if (/Units do not match|dimension/i.test(msg))
       throw new ExpressionError('wrong-dimension', `units do not add up: ${msg}`);
     throw new ExpressionError('expression-error', `cannot evaluate: ${msg}`);
