@@ -91,3 +91,31 @@ describe('domain and order diagnostics (test/fixtures/compressive-gerber.md)', (
     expect(d?.message).toContain('stated below, on line 13');
   });
 });
+
+describe('misread inputs withhold every result (test/fixtures/withheld.md)', () => {
+  const t = readFileSync(new URL('../fixtures/withheld.md', import.meta.url), 'utf8');
+  const r = evaluateNote(t);
+  const [slip, misspelt] = r.checks;
+  it('a load with the wrong unit: error on its line, no safety factor, the requirement not judged', () => {
+    expect(slip.diagnostics.some((d) => d.code === 'wrong-dimension' && d.range.start.line === 10)).toBe(
+      true,
+    );
+    expect(slip.values.n_f).toBeUndefined();
+    expect(slip.requirements[0].met).toBeNull();
+    expect(slip.status).toBe('error');
+    expect(slip.diagnostics.some((d) => d.code === 'results-withheld')).toBe(true);
+    // No follow-on diagnostic contradicts what the author wrote.
+    expect(slip.diagnostics.some((d) => d.code === 'missing-load-pair')).toBe(false);
+  });
+  it('unit slips are named: C is the coulomb, Nm is N*m', () => {
+    const temp = misspelt.diagnostics.find((d) => d.range.start.line === 20);
+    expect(temp?.message).toContain('degC');
+    const torque = misspelt.diagnostics.find((d) => d.range.start.line === 26);
+    expect(torque?.message).toContain('N*m');
+  });
+  it('a helper name one edit from a reserved input is flagged, with a rename fix', () => {
+    const d = misspelt.diagnostics.find((x) => x.code === 'near-reserved-name');
+    expect(d?.range.start.line).toBe(24);
+    expect(d?.fixes?.[0].edits[0].newText).toBe('Kfs');
+  });
+});

@@ -78,7 +78,10 @@ export async function runReportCommand(args: string[], io: Io): Promise<number> 
     histories: historyReader(notePath, workspaceOf(notePath)),
   });
   const html = buildReportHtml({
-    noteName: relative(io.cwd, notePath) || basename(notePath),
+    // Inside the working folder the path helps the reader find the note; outside it, the name.
+    noteName: relative(io.cwd, notePath).startsWith('..')
+      ? basename(notePath)
+      : relative(io.cwd, notePath) || basename(notePath),
     result,
     register: assumptionsRegister(result, text),
     toolVersion: VERSION,

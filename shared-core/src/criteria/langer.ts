@@ -6,7 +6,7 @@
 import { type Computed, computed, infinite, isFiniteNumber, MPA } from '../computed';
 
 export const LANGER_SOURCE =
-  "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-12 (Langer first-cycle yield line S_a + S_m = S_y, Tables 6-6 to 6-8: n_y = S_y/(sigma_a + sigma_m)) and Sec. 6-14 (von Mises peak stress sigma'_max)";
+  "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-12 (Langer first-cycle yield line S_a + S_m = S_y) applied to the von Mises stress of the peak state, Sec. 6-14 (sigma'_max): n_y = S_y / sigma_max_eq";
 
 /** Safety factor against first-cycle yield, `Sy / |sigma_max_eq|`; no stress gives `infinite`. */
 export function firstCycleYieldFactor(Sy: number, sigma_max_eq: number): Computed {

@@ -16,7 +16,7 @@ import { evaluateRequirements } from './requirements';
 import { type AssignStatement, type OptionStatement, parseStatements, type Statement } from './statements';
 import { type CheckResult, type Diagnostic, lineRange, type Method, type NoteResult, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
-import { INPUT_NAMES, MAGNITUDE, nearest, OPTIONS, POSITIVE, RESULT_NAMES } from './vocabulary';
+import { editDistance, INPUT_NAMES, MAGNITUDE, nearest, OPTIONS, POSITIVE, RESULT_NAMES } from './vocabulary';
 
 export interface EvaluateOptions {
   /** Display units; 'auto' follows the units the note is written in. */
@@ -102,12 +102,20 @@ export function evaluateBlock(
       stated.set(name, input);
       ctx.recordStated(name, input.q, input.stmt, classify(input.q.dim));
     }
-    readStatements(ctx, statements, scope, raw);
+    const faults = readStatements(ctx, statements, scope, raw);
     const title = optionMap.get('title')?.value.text;
     if (title) result.title = title;
     result.method = (ctx.option('method') as Method | undefined) ?? 'stress-life';
     result.criterion = ctx.option('criterion');
-    const extras = runCheckMethod(result.method, ctx);
+    // An input the author wrote but the tool could not read (wrong unit, misspelt option,
+    // unreadable line) would silently change every result: none is produced until it is fixed.
+    if (faults > 0)
+      ctx.diag(
+        'information',
+        'results-withheld',
+        `no results until the ${faults === 1 ? 'error' : `${faults} errors`} in this check's inputs ${faults === 1 ? 'is' : 'are'} fixed: a misread input would change them`,
+      );
+    const extras = faults > 0 ? {} : runCheckMethod(result.method, ctx);
     if (extras.haigh) result.haigh = extras.haigh;
     if (extras.sn) result.sn = extras.sn;
     if (extras.tables) result.tables = extras.tables;
@@ -116,7 +124,7 @@ export function evaluateBlock(
     if (extras.criterion) result.criterion = extras.criterion;
     const requireStatements = statements.filter((s) => s.kind === 'require');
     const hasErrors = ctx.diagnostics.some((d) => d.severity === 'error');
-    result.requirements = evaluateRequirements(ctx, requireStatements, scope);
+    result.requirements = evaluateRequirements(ctx, requireStatements, scope, faults > 0);
     if (hasErrors) result.status = 'error';
     else if (result.requirements.length === 0) result.status = 'unchecked';
     else if (result.requirements.some((r) => r.met === null)) result.status = 'error';
@@ -192,13 +200,16 @@ function readStatements(
   statements: Statement[],
   scope: Scope,
   raw: Map<string, Unit | number>,
-): void {
+): number {
+  let faults = 0;
+  const errors = () => ctx.diagnostics.reduce((n, d) => n + (d.severity === 'error' ? 1 : 0), 0);
   const lineOfName = new Map<string, number>();
   // First line where each name is stated, to tell "stated below" from "never stated".
   const statementsBelow = new Map<string, number>();
   for (const s of statements)
     if (s.kind === 'assign' && !statementsBelow.has(s.name.text)) statementsBelow.set(s.name.text, s.line);
   for (const s of statements) {
+    const before = errors();
     switch (s.kind) {
       case 'bad':
         ctx.diag('error', s.code, s.message, s.range);
@@ -215,7 +226,12 @@ function readStatements(
       default:
         break;
     }
+    // A faulty helper name only matters through a reserved input that uses it (which then
+    // fails itself); a faulty reserved input, option or unreadable line always matters.
+    const reserved = s.kind !== 'assign' || s.name.text in INPUT_NAMES || s.name.text in RESULT_NAMES;
+    if (errors() > before && reserved && s.kind !== 'require' && s.kind !== 'solve') faults++;
   }
+  return faults;
 }
 
 function readOption(ctx: CheckContext, s: OptionStatement): void {
@@ -316,11 +332,31 @@ function readAssign(
       const later = used ? statementsBelow.get(used) : undefined;
       if (later !== undefined && later > s.line)
         message = `${name}: \`${used}\` is stated below, on line ${later + 1}: names are read top to bottom, so move that line above this one`;
+      else if (used && UNIT_SLIPS[used])
+        message = `${name}: \`${used}\` is not a unit here: write \`${UNIT_SLIPS[used]}\``;
     }
     ctx.diag('error', err.code, message, r);
     return;
   }
   const info = INPUT_NAMES[name] ?? RESULT_NAMES[name];
+  if (!info) {
+    // A helper name one letter away from a reserved input is most likely a misspelt override.
+    const near = nearReserved(name);
+    if (near)
+      ctx.diag(
+        'warning',
+        'near-reserved-name',
+        `\`${name}\` is not a reserved name, so it does not feed the check: did you mean \`${near}\`?`,
+        s.name.range,
+        [
+          {
+            title: `Rename to \`${near}\``,
+            edits: [{ range: s.name.range, newText: near }],
+            preferred: true,
+          },
+        ],
+      );
+  }
   let dim: DimKey = classify(q.dim);
   if (info && info.dim !== 'other') {
     const want = info.dim === 'paris' ? vectorOf('one')! : vectorOf(info.dim)!;
@@ -335,10 +371,16 @@ function readAssign(
           unitFixes(info.dim, ctx.system, s.expr),
         );
       } else {
+        const slip =
+          info.dim === 'temperature' && /\bC\b/.test(s.expr.text)
+            ? ' (`C` is the coulomb: write `degC`)'
+            : info.dim === 'temperature' && /\bF\b/.test(s.expr.text)
+              ? ' (`F` is the farad: write `degF`)'
+              : '';
         ctx.diag(
           'error',
           'wrong-dimension',
-          `\`${name}\` must be ${ctx.dimLabel(info.dim)}, but \`${s.expr.text}\` is ${ctx.dimLabel(dim)}`,
+          `\`${name}\` must be ${ctx.dimLabel(info.dim)}, but \`${s.expr.text}\` is ${ctx.dimLabel(dim)}${slip}`,
           s.expr.range,
         );
       }
@@ -355,6 +397,36 @@ function readAssign(
   ctx.stated.set(name, { q, stmt: s });
   ctx.recordStated(name, q, s, dim);
 }
+
+const RESERVED_INPUTS = Object.keys(INPUT_NAMES);
+
+/** The reserved input a helper name most likely meant: same letters (case, `_`) or one edit away. */
+function nearReserved(name: string): string | undefined {
+  const squash = (x: string) => x.replace(/_/g, '').toLowerCase();
+  const same = RESERVED_INPUTS.find((r) => squash(r) === squash(name));
+  if (same) return same;
+  if (name.length < 3) return undefined;
+  return RESERVED_INPUTS.find((r) => r.length >= 3 && editDistance(r, name) === 1);
+}
+
+/** Unit spellings that are common in calc notes but not units to mathjs. */
+const UNIT_SLIPS: Record<string, string> = {
+  Nm: 'N*m',
+  Nmm: 'N*mm',
+  kNm: 'kN*m',
+  lbin: 'lbf*in',
+  lbfin: 'lbf*in',
+  inlb: 'lbf*in',
+  ftlb: 'lbf*ft',
+  lbft: 'lbf*ft',
+  Mpa: 'MPa',
+  mpa: 'MPa',
+  Ksi: 'ksi',
+  KSI: 'ksi',
+  PSI: 'psi',
+  MM: 'mm',
+  deg: 'degC or degF',
+};
 
 /** Why a stated reserved value cannot be a real input, or undefined when it can. */
 function implausible(name: string, si: number, dim: DimKey): string | undefined {

@@ -13,6 +13,7 @@ export function evaluateRequirements(
   ctx: CheckContext,
   statements: RequireStatement[],
   scope: Scope,
+  withheld = false,
 ): RequirementResult[] {
   const out: RequirementResult[] = [];
   for (const s of statements) {
@@ -29,6 +30,7 @@ export function evaluateRequirements(
         range: item.whole.range,
       };
       out.push(res);
+      if (withheld) continue;
       const v = ctx.values[symbol];
       if (!v && (symbol in RESULT_NAMES || symbol in INPUT_NAMES)) {
         ctx.diag(
