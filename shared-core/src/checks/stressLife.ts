@@ -221,7 +221,12 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
         ...COMPARED.filter(([k]) => !(needsSy(k) && Sy === undefined)).map(([k]) => ({
           key: k,
           label: criterionModel(k).label,
-          points: criterionModel(k).haighCurve(set, 48),
+          // On the compressive side every classical criterion is the horizontal line at S
+          // (Shigley Fig. 6-27 discussion): drawn when the operating point lies there.
+          points: [
+            ...(sm < 0 ? ([[-(set.Sy > 0 ? set.Sy : set.Sut), set.S]] as Array<[number, number]>) : []),
+            ...criterionModel(k).haighCurve(set, 48),
+          ],
         })),
         ...(Sy !== undefined
           ? [{ key: 'langer', label: 'Langer (first-cycle yield)', points: langerLine(set.Sy) }]
