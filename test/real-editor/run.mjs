@@ -70,11 +70,23 @@ function installTools() {
     log(`installing code-server ${CODE_SERVER_VERSION} into ${CS_DIR} (about 2 minutes, 620 MB)`);
     mkdirSync(CS_DIR, { recursive: true });
     writeFileSync(join(CS_DIR, 'package.json'), '{ "private": true }\n');
-    run('npm', ['install', '--no-audit', '--no-fund', '--no-save', `code-server@${CODE_SERVER_VERSION}`], {
-      cwd: CS_DIR,
-      env: envWithNode24(),
-    });
-    // npm 11 does not run install scripts it was not told to allow: run code-server's by hand.
+    // Its install script is run by hand below, under Node 24: npm must not run it (under CI
+    // npm ran it with the machine's Node 20, which code-server refuses).
+    run(
+      'npm',
+      [
+        'install',
+        '--no-audit',
+        '--no-fund',
+        '--no-save',
+        '--ignore-scripts',
+        `code-server@${CODE_SERVER_VERSION}`,
+      ],
+      {
+        cwd: CS_DIR,
+        env: envWithNode24(),
+      },
+    );
     run('sh', ['postinstall.sh'], {
       cwd: CS_PKG,
       env: { ...envWithNode24(), npm_config_user_agent: `npm/11.19.1 node/v${NODE_VERSION} linux x64` },
