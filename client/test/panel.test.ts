@@ -11,6 +11,7 @@ import { evaluateNote } from '@fatigue-notes/core';
 import { build } from 'esbuild';
 import { type Browser, chromium, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { CONTRACT_BLOCK } from '../../test/fixtures/contractBlock';
 import { panelHtml } from '../src/panel/html';
 import { buildPanelModel } from '../src/panel/model';
 import type { PanelModel } from '../src/panel/protocol';
@@ -23,26 +24,7 @@ const OUT = join(ROOT, 'test-output');
 // Three checks: one passes, one fails, one has an error (a missing unit).
 const NOTE = `# Panel sample
 
-\`\`\`fatigue drive_shaft_fillet
-title: Drive shaft, fillet at the bearing seat
-Sut = 630 MPa
-Sy = 530 MPa
-surface: machined
-rotation: rotating
-temp = 20 degC
-reliability = 0.99
-d = 35 mm
-D = 42 mm
-r = 1.5 mm
-feature: shoulder-fillet
-M_max = 180 N*m
-M_min = -180 N*m
-T_max = 250 N*m
-T_min = 250 N*m
-criterion: goodman
-require: n_f >= 1.5, n_y >= 1.2
-\`\`\`
-
+${CONTRACT_BLOCK}
 \`\`\`fatigue lever_arm
 title: Lever arm, plain section
 Sut = 500 MPa

@@ -10,6 +10,7 @@ import { join, resolve } from 'node:path';
 import { evaluateNote } from '@fatigue-notes/core';
 import { chromium } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { CONTRACT_BLOCK } from '../../test/fixtures/contractBlock';
 import { defaultReportPath, runReportCommand } from '../src/cli/report';
 import { CAUTIONS } from '../src/report/reportHtml';
 
@@ -20,26 +21,7 @@ const NOTE = `# Hoist drive: fatigue checks
 
 Loads from the duty cycle of section 3.
 
-\`\`\`fatigue drive_shaft_fillet
-title: Drive shaft, fillet at the bearing seat
-Sut = 630 MPa
-Sy = 530 MPa
-surface: machined
-rotation: rotating
-temp = 20 degC
-reliability = 0.99
-d = 35 mm
-D = 42 mm
-r = 1.5 mm
-feature: shoulder-fillet
-M_max = 180 N*m
-M_min = -180 N*m
-T_max = 250 N*m
-T_min = 250 N*m
-criterion: goodman
-require: n_f >= 1.5, n_y >= 1.2
-\`\`\`
-
+${CONTRACT_BLOCK}
 Countershaft sized by design mode (Shigley MED 8th ed., Solutions Manual, Problem 7-1 data).
 
 \`\`\`fatigue countershaft_sizing

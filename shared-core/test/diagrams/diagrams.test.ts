@@ -1,5 +1,6 @@
 import { unit } from 'mathjs';
 import { describe, expect, it } from 'vitest';
+import { CONTRACT_BLOCK } from '../../../test/fixtures/contractBlock';
 import { evaluateNote } from '../../src';
 import {
   checkDiagrams,
@@ -14,26 +15,7 @@ import { axisFromTicks, findAll, hasClass, parseXml, textOf, walk, type XmlNode 
 // Sample notes (the contract's example and variations of it): the numbers under test are the
 // check's own results; the diagrams must put them where they say.
 const CONTRACT = `
-\`\`\`fatigue drive_shaft_fillet
-title: Drive shaft, fillet at the bearing seat
-Sut = 630 MPa
-Sy = 530 MPa
-surface: machined
-rotation: rotating
-temp = 20 degC
-reliability = 0.99
-d = 35 mm
-D = 42 mm
-r = 1.5 mm
-feature: shoulder-fillet
-M_max = 180 N*m
-M_min = -180 N*m
-T_max = 250 N*m
-T_min = 250 N*m
-criterion: goodman
-require: n_f >= 1.5, n_y >= 1.2
-\`\`\`
-`;
+${CONTRACT_BLOCK}`;
 
 const MORE = `
 \`\`\`fatigue failing
