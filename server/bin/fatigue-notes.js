@@ -1,3 +1,9 @@
 #!/usr/bin/env node
-
-require('../dist/cli.js');
+// `--version` is answered before the bundle loads: a checker's script asks it often, and
+// the version is the package's (server/test/check-cli.test.ts holds the two equal).
+const first = process.argv[2];
+if (first === '--version' || first === '-v') {
+  process.stdout.write(`${require('../package.json').version}\n`);
+} else {
+  require('../dist/cli.js');
+}

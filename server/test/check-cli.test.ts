@@ -100,3 +100,14 @@ describe('fatigue-notes check', () => {
     }
   });
 });
+
+describe('fatigue-notes --version', () => {
+  it('answers the package version before the bundle loads, the same as the bundle knows', async () => {
+    const { VERSION } = await import('../src/cli/version');
+    const pkg = JSON.parse(readFileSync(join(root, 'server/package.json'), 'utf8')) as { version: string };
+    expect(VERSION).toBe(pkg.version);
+    const r = run(['--version']);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toBe(`${VERSION}\n`);
+  });
+});

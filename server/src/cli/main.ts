@@ -1,6 +1,7 @@
 /** Entry of the `fatigue-notes` command: check, cycles, lsp, report, compare. */
 
 import { isParseWorker, runParseWorker } from '../lsp/parseWorker';
+import { startServer } from '../lsp/server';
 import { runCheckCommand } from './check';
 import { runCompareCommand } from './compare';
 import { runCyclesCommand } from './cycles';
@@ -31,11 +32,11 @@ export async function main(argv: string[], io: Io): Promise<number> {
       return runReportCommand(rest, io);
     case 'compare':
       return runCompareCommand(rest, io);
-    case 'lsp': {
-      const { startServer } = await import('../lsp/server');
+    case 'lsp':
+      // A static import: a dynamic import() makes the bundler wrap every module in a lazy
+      // initialiser, which defeats tree-shaking (platform-notes.md).
       startServer();
       return -1;
-    }
     case '--version':
     case '-v':
       io.stdout(`${VERSION}\n`);
