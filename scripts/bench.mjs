@@ -24,6 +24,7 @@ for (const r of JSON.parse(execFileSync(process.execPath, [out], { encoding: 'ut
 
 // Other sections write JSON rows on their last stdout line, when their scripts exist.
 for (const [section, script, args] of [
+  ['startup', 'scripts/bench-startup.mjs', ['--json']],
   ['server', 'scripts/bench-lsp.mjs', ['--json']],
   ['rainflow', 'scripts/bench-rainflow.mjs', ['--json']],
   ['hardening', 'scripts/bench-hardening.mjs', ['--json']],
