@@ -150,6 +150,12 @@ function withNote(c: Computed, terms: Term[], message: string): Computed {
   };
 }
 
+const POINT_WORDS: Record<CutoutPoint['key'], string> = {
+  circumferential: 'circumferential end',
+  axial: 'axial end',
+  between: 'point between the ends',
+};
+
 function mm(x: number): string {
   return `${(x / MM).toPrecision(4)} mm`;
 }
@@ -218,7 +224,12 @@ function shellCutoutConcentration(
   } else Kt = ctx.input('Kt') ?? null;
   if (Kt === null) return null;
   if (Kt < 1)
-    ctx.diag('warning', 'absurd-value', 'Kt below 1 means the notch lowers the stress: check it', ctx.rangeOf('Kt'));
+    ctx.diag(
+      'warning',
+      'absurd-value',
+      'Kt below 1 means the notch lowers the stress: check it',
+      ctx.rangeOf('Kt'),
+    );
 
   // Notch sensitivity with the radius of curvature of the governing point.
   let q: number | null;
@@ -229,7 +240,9 @@ function shellCutoutConcentration(
     const rUsed = rStated ?? point.rho;
     const c = withNote(
       qAt(rUsed),
-      rStated !== undefined ? [] : [{ name: `rho at the ${point.key} point`, value: point.rho / MM, unit: 'mm' }],
+      rStated !== undefined
+        ? []
+        : [{ name: `rho at the ${point.key} point`, value: point.rho / MM, unit: 'mm' }],
       rStated !== undefined
         ? `the stated r = ${mm(rStated)} is used at every edge point; governing point: the ${point.label}`
         : `notch radius: the radius of curvature at the governing point, the ${point.label}: rho = ${mm(point.rho)} (${point.key === 'circumferential' ? 'b^2/a' : point.key === 'axial' ? 'a^2/b' : '(a^2 sin^2 eta + b^2 cos^2 eta)^(3/2)/(a b)'}, Inglis)`,
@@ -274,11 +287,12 @@ function shellCutoutConcentration(
     const pts = gov.point.key === 'between' ? [...gov.ends, gov.point] : gov.ends;
     for (const p of pts) {
       const qp = qOfRho(p.rho);
+      const at = POINT_WORDS[p.key];
       terms.push(
-        { name: `Kt at the ${p.key} point`, value: p.Kt, unit: '' },
-        { name: `rho at the ${p.key} point`, value: p.rho / MM, unit: 'mm' },
-        { name: `q at the ${p.key} point`, value: qp, unit: '' },
-        { name: `Kf at the ${p.key} point`, value: 1 + qp * (Math.max(p.Kt, 1) - 1), unit: '' },
+        { name: `Kt, ${at}`, value: p.Kt, unit: '' },
+        { name: `rho, ${at}`, value: p.rho / MM, unit: 'mm' },
+        { name: `q, ${at}`, value: qp, unit: '' },
+        { name: `Kf, ${at}`, value: 1 + qp * (Math.max(p.Kt, 1) - 1), unit: '' },
       );
     }
     kf = withNote(
@@ -422,14 +436,7 @@ export function concentration(
             },
           );
         } else {
-          q = notchSensitivity(
-            ctx,
-            shear,
-            r ?? 0,
-            Sut,
-            cls,
-            ctx.has('r') ? 'r' : ktName,
-          );
+          q = notchSensitivity(ctx, shear, r ?? 0, Sut, cls, ctx.has('r') ? 'r' : ktName);
         }
       }
       if (q === null) {

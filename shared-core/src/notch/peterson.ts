@@ -67,7 +67,12 @@ export function noNotchData(cls: string, load: StressKind): Computed {
 }
 
 /** Peterson notch sensitivity for notch radius r (m), ultimate strength Sut (Pa), material family `cls`. */
-export function petersonSensitivity(r: number, Sut: number, cls: MaterialClass | string, load: StressKind): Computed {
+export function petersonSensitivity(
+  r: number,
+  Sut: number,
+  cls: MaterialClass | string,
+  load: StressKind,
+): Computed {
   const sym = load === 'shear' ? 'qs' : 'q';
   const formula = `${sym} = 1/(1 + a/r)`;
   const notes: MethodNote[] = [];
