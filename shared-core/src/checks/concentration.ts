@@ -240,9 +240,7 @@ function shellCutoutConcentration(
     const rUsed = rStated ?? point.rho;
     const c = withNote(
       qAt(rUsed),
-      rStated !== undefined
-        ? []
-        : [{ name: `rho at the ${point.key} point`, value: point.rho / MM, unit: 'mm' }],
+      [],
       rStated !== undefined
         ? `the stated r = ${mm(rStated)} is used at every edge point; governing point: the ${point.label}`
         : `notch radius: the radius of curvature at the governing point, the ${point.label}: rho = ${mm(point.rho)} (${point.key === 'circumferential' ? 'b^2/a' : point.key === 'axial' ? 'a^2/b' : '(a^2 sin^2 eta + b^2 cos^2 eta)^(3/2)/(a b)'}, Inglis)`,
