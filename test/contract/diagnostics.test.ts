@@ -119,3 +119,30 @@ describe('misread inputs withhold every result (test/fixtures/withheld.md)', () 
     expect(d?.fixes?.[0].edits[0].newText).toBe('Kfs');
   });
 });
+
+describe('notch data and shell openings (test/fixtures/notch-warnings.md)', () => {
+  const t = readFileSync(new URL('../fixtures/notch-warnings.md', import.meta.url), 'utf8');
+  const tl = t.split('\n');
+  const r = evaluateNote(t);
+  const [ti, opening, stated] = r.checks;
+  const lineIn = (prefix: string, after: number) =>
+    tl.findIndex((l, k) => k >= after && l.startsWith(prefix));
+  it('a titanium alloy without a stated q: no-notch-data warning on the notch radius (q = 1, never the steel fit)', () => {
+    const d = ti.diagnostics.find((x) => x.code === 'no-notch-data');
+    expect(d?.severity).toBe('warning');
+    expect(d?.range.start.line).toBe(lineIn('r = 1.5 mm', 0));
+    expect(d?.message).toContain('state `q`');
+    expect(ti.values.q?.si).toBe(1);
+  });
+  it('an opening large against sqrt(R t): large-shell-opening warning on the feature line', () => {
+    const d = opening.diagnostics.find((x) => x.code === 'large-shell-opening');
+    expect(d?.severity).toBe('warning');
+    expect(d?.range.start.line).toBe(lineIn('feature: shell-cutout', 0));
+    expect(d?.message).toContain('State `Kt`');
+  });
+  it('the same opening with a stated Kt: no warning, the stated value with the tool value beside it', () => {
+    expect(stated.diagnostics.some((x) => x.code === 'large-shell-opening')).toBe(false);
+    expect(stated.values.Kt?.origin).toBe('stated');
+    expect(stated.values.Kt?.tool?.si).toBeCloseTo(2.5, 10);
+  });
+});

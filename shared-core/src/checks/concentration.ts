@@ -1,20 +1,28 @@
 /**
  * Stress concentration at the checked section: Kt from the feature's fit (or stated),
- * notch sensitivity q (Neuber or Peterson), Kf = 1 + q (Kt - 1), and the concentration on
- * the mean stress (Kf, or reduced by local yielding when asked).
+ * notch sensitivity q from the material family's own data (Neuber or Peterson),
+ * Kf = 1 + q (Kt - 1), and the concentration on the mean stress (Kf, or reduced by local
+ * yielding when asked). A shell cutout is evaluated at its critical edge points (both ends of
+ * the opening and the edge between them), each with its own Kt, radius of curvature, q and Kf;
+ * the governing one is reported, with the shell parameter of the opening.
  */
-import { computed } from '../computed';
+import { type Computed, computed, MM, type Term } from '../computed';
 import type { CheckContext } from '../language/checkContext';
+import type { Range } from '../language/types';
 import type { MaterialClass } from '../materials';
 import {
+  type CutoutPoint,
   crossHoleKt,
+  familyNotchSensitivity,
   fatigueNotchFactor,
+  governingCutoutPoint,
   grooveKt,
   meanStressNotchFactor,
-  neuberSensitivity,
-  petersonSensitivity,
+  type NotchSensitivityModel,
   plateHoleKt,
+  SHELL_PARAMETER_LIMIT,
   shellCutoutKt,
+  shellParameter,
   shoulderFilletKt,
 } from '../notch';
 import { active, type NominalStresses } from './loads';
@@ -116,20 +124,185 @@ function fitKt(ctx: CheckContext, feature: string, mode: Mode) {
   }
 }
 
+function sensitivityModel(ctx: CheckContext): NotchSensitivityModel {
+  return ctx.option('notch-sensitivity') === 'peterson' ? 'peterson' : 'neuber';
+}
+
 function notchSensitivity(
   ctx: CheckContext,
   shear: boolean,
   r: number,
   Sut: number,
-  cls: MaterialClass,
+  cls: MaterialClass | string,
   rangeName: string,
 ): number | null {
   const name = shear ? 'qs' : 'q';
   if (ctx.has(name)) return ctx.input(name)!;
-  const model = ctx.option('notch-sensitivity') ?? 'neuber';
-  const load = shear ? 'shear' : 'normal';
-  const c = model === 'peterson' ? petersonSensitivity(r, Sut, cls, load) : neuberSensitivity(r, Sut, load);
+  const c = familyNotchSensitivity(sensitivityModel(ctx), cls, r, Sut, shear ? 'shear' : 'normal');
   return ctx.result(name, c, ['r', 'Sut'], { range: ctx.rangeOf(rangeName) });
+}
+
+function withNote(c: Computed, terms: Term[], message: string): Computed {
+  return {
+    ...c,
+    terms: [...(c.terms ?? []), ...terms],
+    notes: [...(c.notes ?? []), { code: 'peak-location', severity: 'information', message }],
+  };
+}
+
+const POINT_WORDS: Record<CutoutPoint['key'], string> = {
+  circumferential: 'circumferential end',
+  axial: 'axial end',
+  between: 'point between the ends',
+};
+
+function mm(x: number): string {
+  return `${(x / MM).toPrecision(4)} mm`;
+}
+
+/**
+ * Kf of an elliptical or circular opening in a pressurised shell (the hoop stress is the
+ * nominal stress). Returns null when it cannot be computed (diagnosed).
+ */
+function shellCutoutConcentration(
+  ctx: CheckContext,
+  s: NominalStresses,
+  Sut: number,
+  cls: MaterialClass | string,
+  range: Range,
+): number | null {
+  const k = s.shell?.kind === 'sphere' ? 1 : 0.5;
+  const ktStated = ctx.has('Kt');
+  let w: number | undefined;
+  let h: number | undefined;
+  if (ktStated) {
+    const wi = ctx.input('w_c');
+    const hi = ctx.input('h_c');
+    if (wi !== undefined && hi !== undefined && wi > 0 && hi > 0) {
+      w = wi;
+      h = hi;
+    }
+  } else {
+    w = positive(ctx, 'w_c', 'a shell cutout');
+    h = positive(ctx, 'h_c', 'a shell cutout');
+    if (w === undefined || h === undefined) return null;
+  }
+
+  // Shell parameter: is the opening small against sqrt(R t)?
+  const D_i = ctx.input('D_i');
+  const t = ctx.input('t');
+  if (w !== undefined && h !== undefined && D_i !== undefined && t !== undefined && D_i > 0 && t > 0) {
+    const c = shellParameter(Math.max(w, h) / 2, D_i, t);
+    const beyond = c.value > SHELL_PARAMETER_LIMIT;
+    const notes =
+      ktStated && beyond
+        ? [
+            ...(c.notes ?? []).filter((n) => n.code !== 'large-shell-opening'),
+            {
+              code: 'large-shell-opening',
+              severity: 'information' as const,
+              message: `beta = ${c.value.toFixed(2)} > ${SHELL_PARAMETER_LIMIT}: beyond the flat-plate range; the stated Kt is used in place of the flat-plate value.`,
+            },
+          ]
+        : c.notes;
+    ctx.result('beta_shell', { ...c, ...(notes ? { notes } : {}) }, ['w_c', 'h_c', 'D_i', 't'], {
+      range,
+    });
+  }
+
+  const model = sensitivityModel(ctx);
+  const rStated = ctx.input('r');
+  const qStated = ctx.input('q');
+  const qAt = (rho: number) => familyNotchSensitivity(model, cls, rStated ?? rho, Sut, 'normal');
+  const qOfRho = (rho: number) => qStated ?? qAt(rho).value;
+  const gov = w !== undefined && h !== undefined ? governingCutoutPoint(w, h, k, qOfRho) : undefined;
+
+  // Kt at the governing point (a stated Kt replaces it; the tool's value stays beside it).
+  let Kt: number | null;
+  if (gov && w !== undefined && h !== undefined) {
+    Kt = ctx.result('Kt', shellCutoutKt(w, h, k, gov.point.eta), ['w_c', 'h_c'], { range });
+  } else Kt = ctx.input('Kt') ?? null;
+  if (Kt === null) return null;
+  if (Kt < 1)
+    ctx.diag(
+      'warning',
+      'absurd-value',
+      'Kt below 1 means the notch lowers the stress: check it',
+      ctx.rangeOf('Kt'),
+    );
+
+  // Notch sensitivity with the radius of curvature of the governing point.
+  let q: number | null;
+  let point: CutoutPoint | undefined;
+  if (qStated !== undefined) q = qStated;
+  else if (!ktStated && gov) {
+    point = gov.point;
+    const rUsed = rStated ?? point.rho;
+    const c = withNote(
+      qAt(rUsed),
+      [],
+      rStated !== undefined
+        ? `the stated r = ${mm(rStated)} is used at every edge point; governing point: the ${point.label}`
+        : `notch radius: the radius of curvature at the governing point, the ${point.label}: rho = ${mm(point.rho)} (${point.key === 'circumferential' ? 'b^2/a' : point.key === 'axial' ? 'a^2/b' : '(a^2 sin^2 eta + b^2 cos^2 eta)^(3/2)/(a b)'}, Inglis)`,
+    );
+    q = ctx.result('q', c, rStated !== undefined ? ['r', 'Sut'] : ['w_c', 'h_c', 'Sut'], {
+      range: rStated !== undefined ? ctx.rangeOf('r') : range,
+    });
+  } else {
+    // Kt stated: where the stated peak lies is not known; the larger end radius gives the
+    // larger q (conservative), unless r is stated.
+    const rho = rStated ?? (gov ? Math.max(gov.ends[0].rho, gov.ends[1].rho) : undefined);
+    if (rho === undefined) {
+      ctx.diag(
+        'warning',
+        'defaulted-notch-sensitivity',
+        'no notch radius `r`: full notch sensitivity (q = 1, Kf = Kt) assumed',
+        ctx.rangeOf('Kt'),
+      );
+      q = ctx.result('q', computed(1, 'q = 1', 'conservative default without a notch radius'), [], {
+        origin: 'default',
+        assumption: 'no notch radius: q = 1',
+      });
+    } else {
+      const c = withNote(
+        qAt(rho),
+        [],
+        rStated !== undefined
+          ? `Kt is stated: the stated r = ${mm(rStated)} is used`
+          : `Kt is stated: q at the larger end radius max(b^2/a, a^2/b) = ${mm(rho)} (conservative: the tool does not know where the stated peak lies; state \`r\` or \`q\` for it)`,
+      );
+      q = ctx.result('q', c, rStated !== undefined ? ['r', 'Sut'] : ['w_c', 'h_c', 'Sut'], {
+        range: rStated !== undefined ? ctx.rangeOf('r') : range,
+      });
+    }
+  }
+  if (q === null) return null;
+
+  // Kf, with each end's own Kt, radius, q and Kf in the derivation.
+  let kf = fatigueNotchFactor(Kt, q, 'Kf');
+  if (gov && !ktStated) {
+    const terms: Term[] = [];
+    const pts = gov.point.key === 'between' ? [...gov.ends, gov.point] : gov.ends;
+    for (const p of pts) {
+      const qp = qOfRho(p.rho);
+      const at = POINT_WORDS[p.key];
+      terms.push(
+        { name: `Kt, ${at}`, value: p.Kt, unit: '' },
+        { name: `rho, ${at}`, value: p.rho / MM, unit: 'mm' },
+        { name: `q, ${at}`, value: qp, unit: '' },
+        { name: `Kf, ${at}`, value: 1 + qp * (Math.max(p.Kt, 1) - 1), unit: '' },
+      );
+    }
+    kf = withNote(
+      kf,
+      terms,
+      `governing point: the ${gov.point.label} (largest Kf of the edge)` +
+        (gov.point.key === 'between'
+          ? '; a point between the ends governs because the sharp end with the high Kt has a small radius and a low q'
+          : ''),
+    );
+  }
+  return ctx.result('Kf', kf, ['Kt', 'q'], { range: ctx.values.q?.range ?? range });
 }
 
 export function concentration(
@@ -137,7 +310,7 @@ export function concentration(
   s: NominalStresses,
   Sut: number,
   Sy: number | undefined,
-  cls: MaterialClass,
+  cls: MaterialClass | string,
 ): Concentration | null {
   const out: Concentration = { Kf: 1, Kfs: 1, Kf_ax: 1, Kfm: 1, Kfsm: 1, Kf_axm: 1 };
   const feature = ctx.option('feature');
@@ -187,21 +360,14 @@ export function concentration(
     let Kf: number | null;
     if (ctx.has(kfName) && !ctx.has(ktName)) {
       Kf = ctx.input(kfName)!;
+    } else if (s.geometry === 'shell' && feature === 'shell-cutout') {
+      Kf = shellCutoutConcentration(ctx, s, Sut, cls, featureRange);
     } else {
       // Kt: the fit, then a stated value overrides it (both kept).
       let Kt: number | null = null;
       let r: number | undefined;
       let fitInputs: string[] = [];
-      if (s.geometry === 'shell' && feature === 'shell-cutout') {
-        const w = positive(ctx, 'w_c', 'a shell cutout');
-        const h = positive(ctx, 'h_c', 'a shell cutout');
-        if (w !== undefined && h !== undefined) {
-          const c = shellCutoutKt(w, h, s.shell?.kind === 'sphere' ? 1 : 0.5);
-          Kt = ctx.result(ktName, c, ['w_c', 'h_c'], { range: featureRange });
-          const rho = c.terms?.find((t) => t.name === 'rho');
-          r = ctx.input('r') ?? (rho ? rho.value * (rho.unit === 'mm' ? 1e-3 : 1) : Math.min(w, h) / 2);
-        } else if (ctx.has(ktName)) Kt = ctx.input(ktName)!;
-      } else if (feature && feature !== 'none') {
+      if (feature && feature !== 'none') {
         const fit = fitKt(ctx, feature, mode);
         if (fit) {
           fitInputs = fit.inputs;
@@ -268,14 +434,7 @@ export function concentration(
             },
           );
         } else {
-          q = notchSensitivity(
-            ctx,
-            shear,
-            r ?? 0,
-            Sut,
-            ctx.options.has('material') ? cls : 'steel',
-            ctx.has('r') ? 'r' : ktName,
-          );
+          q = notchSensitivity(ctx, shear, r ?? 0, Sut, cls, ctx.has('r') ? 'r' : ktName);
         }
       }
       if (q === null) {

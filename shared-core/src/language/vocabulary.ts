@@ -101,6 +101,11 @@ export const RESULT_NAMES: Record<string, NameInfo> = ownWords({
   sigma_hoop_m: { dim: 'stress', meaning: 'mean hoop stress' },
   sigma_long_a: { dim: 'stress', meaning: 'longitudinal stress amplitude' },
   sigma_long_m: { dim: 'stress', meaning: 'mean longitudinal stress' },
+  beta_shell: {
+    dim: 'one',
+    meaning:
+      'shell parameter of an opening: its half-size against sqrt(R t) (flat-plate Kt holds for small values)',
+  },
   Kfm: { dim: 'one', meaning: 'fatigue stress concentration on the mean stress, bending' },
   Kfsm: { dim: 'one', meaning: 'fatigue stress concentration on the mean stress, torsion' },
   Kf_axm: { dim: 'one', meaning: 'fatigue stress concentration on the mean stress, axial' },

@@ -16,8 +16,15 @@ describe('petersonSensitivity', () => {
     expect(r.terms?.find((t) => t.name === 'a')?.value).toBeCloseTo(0.185, 3);
   });
 
-  it('aluminium: a = 0.635 mm (Pilkey, Peterson SCF 3rd ed., Sec. 1.9, from memory): q = 1/2 at r = 0.635 mm', () => {
-    expect(petersonSensitivity(0.635 * MM, 300 * MPA, 'aluminium', 'normal').value).toBeCloseTo(0.5, 12);
+  it("aluminium: Peterson's a = 0.51 mm (0.02 in) for wrought aluminium alloys (Peterson 1959 as quoted in Dowling, Mechanical Behavior of Materials, Sec. 10.3, Eq. 10.9; from memory): q = 1/2 at r = 0.51 mm, 0.797 at 2 mm, 0.943 at 8.5 mm, whatever Sut", () => {
+    expect(petersonSensitivity(0.51 * MM, 300 * MPA, 'aluminium', 'normal').value).toBeCloseTo(0.5, 12);
+    expect(petersonSensitivity(2 * MM, 310 * MPA, 'aluminium', 'normal').value).toBeCloseTo(
+      1 / (1 + 0.51 / 2),
+      12,
+    );
+    expect(petersonSensitivity(8.5 * MM, 570 * MPA, 'aluminium', 'normal').value).toBeCloseTo(0.9434, 4);
+    // 0.02 in exactly, within the rounding of the published 0.51 mm
+    expect(Math.abs(0.51 - 0.02 * 25.4)).toBeLessThan(0.005);
   });
 
   it('shear: a = 0.6 a_normal (common practice, no source), so qs > q', () => {
@@ -41,15 +48,28 @@ describe('petersonSensitivity', () => {
     );
   });
 
-  it('classes without a verified constant answer conservatively with a note', () => {
-    const ti = petersonSensitivity(1 * MM, 900 * MPA, 'titanium', 'normal');
-    expect(ti.value).toBe(1);
-    expect(ti.notes?.[0]?.code).toBe('no-material-constant');
-    const ci = petersonSensitivity(1 * MM, 250 * MPA, 'cast-iron', 'normal');
-    expect(ci.value).toBeCloseTo(0.2, 12);
-    expect(ci.notes?.[0]?.code).toBe('no-material-constant');
+  it('families without published data (titanium, cast iron, any other): q = 1 (Kf = Kt) with a no-notch-data warning, never the steel correlation', () => {
+    for (const cls of ['titanium', 'cast-iron', 'magnesium']) {
+      for (const load of ['normal', 'shear'] as const) {
+        const r = petersonSensitivity(1 * MM, 900 * MPA, cls, load);
+        expect(r.value).toBe(1);
+        expect(r.notes?.[0]?.code).toBe('no-notch-data');
+        expect(r.notes?.[0]?.severity).toBe('warning');
+        expect(r.notes?.[0]?.message).toContain(load === 'shear' ? '`qs`' : '`q`');
+      }
+    }
+    // The cast-iron warning quotes Shigley's q = 0.20 for the engineer to state (Sec. 6-10, from memory).
+    expect(petersonSensitivity(1 * MM, 250 * MPA, 'cast-iron', 'normal').notes?.[0]?.message).toContain(
+      '0.20',
+    );
+  });
+
+  it('stainless: the steel correlation by analogy, said in an information note', () => {
     const ss = petersonSensitivity(1 * MM, 600 * MPA, 'stainless', 'normal');
-    expect(ss.notes?.[0]?.code).toBe('no-material-constant');
+    const st = petersonSensitivity(1 * MM, 600 * MPA, 'steel', 'normal');
+    expect(ss.value).toBeCloseTo(st.value, 12);
+    expect(ss.notes?.[0]?.code).toBe('notch-data-substitute');
+    expect(ss.notes?.[0]?.severity).toBe('information');
   });
 
   it('invalid inputs: q = 1 with an error note', () => {
