@@ -187,8 +187,10 @@ export function runDamage(ctx: CheckContext): MethodExtras {
   if (!sec) return {};
   if (sec.geometry === 'round' && sec.rotating && used.has('M')) {
     // A history's cycles have means of their own; a spectrum level its stated mean moment.
-    const mean = history ? 1 : levels.find((l) => (l.loads.M?.m ?? 0) !== 0)?.loads.M?.m ?? 0;
-    const where = history ? loadRange : (levels.find((l) => (l.loads.M?.m ?? 0) !== 0)?.stmt.whole ?? loadRange);
+    const mean = history ? 1 : (levels.find((l) => (l.loads.M?.m ?? 0) !== 0)?.loads.M?.m ?? 0);
+    const where = history
+      ? loadRange
+      : (levels.find((l) => (l.loads.M?.m ?? 0) !== 0)?.stmt.whole ?? loadRange);
     warnRotationAssumed(ctx, mean, where);
   }
   const chain = enduranceChain(ctx, st, sec.loadKind, sec.geometry, sec.hasAxial);
@@ -473,11 +475,16 @@ function historyPass(
   const rf = counter.finish();
   for (const n of rf.notes)
     if (n.code !== 'history-too-few-points') ctx.diag(n.severity ?? 'warning', n.code, n.message, h.range);
-  // The governing point: the larger damage; a point that fails statically governs first.
-  const gov = governingIndex(
-    states.map((st) => (st.staticCount > 0 ? Number.POSITIVE_INFINITY : st.acc.result(0).D)),
-    'max',
-  );
+  // The governing point: the one with more cycles that fail statically, then the larger damage.
+  let gov = 0;
+  states.forEach((st, k) => {
+    const b = states[gov];
+    if (
+      st.staticCount > b.staticCount ||
+      (st.staticCount === b.staticCount && st.acc.result(0).D > b.acc.result(0).D)
+    )
+      gov = k;
+  });
   const g = states[gov];
   const at = two ? ` at ${sec.points[gov].words}` : '';
   g.tally.report(ctx, ev.critRange, `counted cycles${at}`);
@@ -732,16 +739,20 @@ function recordDamage(
     pts.forEach((p, k) => {
       ctx.result(
         pointName('D', p),
-        computed(
-          pass.pointDamage![k],
-          `${pointName('D', p)} = sum of n_i / N_i at this fibre`,
-          res.source,
-        ),
+        computed(pass.pointDamage![k], `${pointName('D', p)} = sum of n_i / N_i at this fibre`, res.source),
         inputs,
         { dim: 'one', range, meaning: `Miner damage of one pass at ${p.words}` },
       );
     });
-    notes.push(governingNote(ctx, 'D', pts, pass.gov, pts.map((p) => ctx.values[pointName('D', p)]?.display ?? '')));
+    notes.push(
+      governingNote(
+        ctx,
+        'D',
+        pts,
+        pass.gov,
+        pts.map((p) => ctx.values[pointName('D', p)]?.display ?? ''),
+      ),
+    );
   }
   ctx.result('D', { ...res, notes }, inputs, {
     dim: 'one',

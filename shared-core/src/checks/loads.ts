@@ -67,7 +67,7 @@ export function readPair(ctx: CheckContext, base: Base): Component | undefined {
     return undefined;
   }
   if (hasMaxMin) {
-    let max = ctx.input(maxN);
+    const max = ctx.input(maxN);
     let min = ctx.input(minN);
     if (max === undefined && min !== undefined) {
       ctx.diag(

@@ -12,8 +12,8 @@ import {
   langerLine,
 } from '../criteria';
 import type { CheckContext } from '../language/checkContext';
-import { nameInfo } from '../language/vocabulary';
 import type { HaighData, SnData } from '../language/types';
+import { nameInfo } from '../language/vocabulary';
 import { lifeAtStress, strengthAtLife } from '../sn';
 import { type EquivalentStresses, equivalentStresses, pointEquivalentStresses } from '../stress';
 import { biaxialVonMises } from '../stress/biaxial';
@@ -131,9 +131,7 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
     const v2 = biaxialVonMises('sigma_max_eq', h.m - h.a, l.m - l.a, 'sigma_hoop_min', 'sigma_long_min');
     const smax = ctx.result(
       'sigma_max_eq',
-      v2.value > v1.value
-        ? { ...v2, formula: `${v2.formula}  (the instant p_min governs)` }
-        : v1,
+      v2.value > v1.value ? { ...v2, formula: `${v2.formula}  (the instant p_min governs)` } : v1,
       ['sigma_hoop_a', 'sigma_hoop_m', 'sigma_long_a', 'sigma_long_m'],
       { range: opRange },
     );
@@ -178,14 +176,19 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
       const eqG = states[gov].eq!;
       ctx.result(
         'sigma_max_eq',
-        withNote(eqG.sigma_max_eq, governingNote(ctx, 'sigma_max_eq', points, gov, displays(ctx, 'sigma_max_eq', points))),
+        withNote(
+          eqG.sigma_max_eq,
+          governingNote(ctx, 'sigma_max_eq', points, gov, displays(ctx, 'sigma_max_eq', points)),
+        ),
         points.map((p) => pointName('sigma_max_eq', p)),
         { range: opRange },
       );
     } else {
       // One point: a rotating shaft as it always was (amplitudes added as magnitudes: every
       // fibre passes through both sides of the moment); otherwise the signed stresses at the point.
-      const eq = rotating ? equivalentStresses(input(ONLY_POINT)) : pointEquivalentStresses(input(ONLY_POINT));
+      const eq = rotating
+        ? equivalentStresses(input(ONLY_POINT))
+        : pointEquivalentStresses(input(ONLY_POINT));
       const sa = ctx.result('sigma_a_eq', eq.sigma_a_eq, ins, { range: opRange });
       const sm = ctx.result('sigma_m_eq', eq.sigma_m_eq, ins, { range: opRange });
       const smax = ctx.result('sigma_max_eq', eq.sigma_max_eq, ins, { range: opRange });
@@ -204,12 +207,17 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
         range: yRange,
       });
     } else {
-      const c = points.map((p, i) => firstCycleYieldFactor(Sy, states[i].smax!));
+      const c = states.map((x) => firstCycleYieldFactor(Sy, x.smax!));
       points.forEach((p, i) => {
-        ctx.result(pointName('n_y', p), { ...c[i], notes: infoOnly(c[i].notes) }, ['Sy', pointName('sigma_max_eq', p)], {
-          range: yRange,
-          meaning: `first-cycle yield safety factor at ${p.words}`,
-        });
+        ctx.result(
+          pointName('n_y', p),
+          { ...c[i], notes: infoOnly(c[i].notes) },
+          ['Sy', pointName('sigma_max_eq', p)],
+          {
+            range: yRange,
+            meaning: `first-cycle yield safety factor at ${p.words}`,
+          },
+        );
       });
       const gov = governingIndex(
         c.map((x) => (x.infinite ? null : x.value)),
@@ -243,12 +251,22 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
       const n = governingNote(ctx, base, points, gov, displays(ctx, base, points));
       return { ...n, message: `${n.message} (${why})` };
     };
-    ctx.result('sigma_a_eq', withNote(eqG.sigma_a_eq, note('sigma_a_eq')), [pointName('sigma_a_eq', points[gov])], {
-      range: opRange,
-    });
-    ctx.result('sigma_m_eq', withNote(eqG.sigma_m_eq, note('sigma_m_eq')), [pointName('sigma_m_eq', points[gov])], {
-      range: opRange,
-    });
+    ctx.result(
+      'sigma_a_eq',
+      withNote(eqG.sigma_a_eq, note('sigma_a_eq')),
+      [pointName('sigma_a_eq', points[gov])],
+      {
+        range: opRange,
+      },
+    );
+    ctx.result(
+      'sigma_m_eq',
+      withNote(eqG.sigma_m_eq, note('sigma_m_eq')),
+      [pointName('sigma_m_eq', points[gov])],
+      {
+        range: opRange,
+      },
+    );
   };
   // Without any factor or life: the point with the larger amplitude plus tensile mean is shown.
   const fallbackGov = () =>
@@ -265,7 +283,10 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
   const { criterion, lineOpt, critRange } = choice;
 
   if (chain.S === null && chain.line === null) {
-    recordFatigueEq(fallbackGov(), 'no fatigue strength: the point with the larger sigma_a_eq + tensile sigma_m_eq');
+    recordFatigueEq(
+      fallbackGov(),
+      'no fatigue strength: the point with the larger sigma_a_eq + tensile sigma_m_eq',
+    );
     return { criterion };
   }
 
@@ -298,10 +319,13 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
   // Each point's safety factor (chosen criterion) and equivalent fully reversed stress.
   const set = S !== null && S > 0 ? strengths(S) : null;
   const canFactor = set !== null && !(needsSy(criterion) && Sy === undefined);
-  const nfC = canFactor ? states.map((_, i) => fatigueSafetyFactor(criterion, lineOpt, sa(i), sm(i), set!)) : null;
+  const nfC = canFactor
+    ? states.map((_, i) => fatigueSafetyFactor(criterion, lineOpt, sa(i), sm(i), set!))
+    : null;
   const model = criterionModel(criterion);
   const base = chain.line ? strengths(chain.S ?? chain.line.S2) : null;
-  const canReverse = base !== null && !((criterion === 'soderberg' || criterion === 'asme-elliptic') && Sy === undefined);
+  const canReverse =
+    base !== null && !((criterion === 'soderberg' || criterion === 'asme-elliptic') && Sy === undefined);
   const arC = canReverse ? states.map((_, i) => model.equivalentReversed(sa(i), sm(i), base!)) : null;
   const govF = nfC
     ? governingIndex(
@@ -316,7 +340,11 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
       : fallbackGov();
   recordFatigueEq(
     govF,
-    nfC ? 'the point of the smallest n_f' : arC ? 'the point of the largest sigma_ar' : 'the point with the larger sigma_a_eq + tensile sigma_m_eq',
+    nfC
+      ? 'the point of the smallest n_f'
+      : arC
+        ? 'the point of the largest sigma_ar'
+        : 'the point with the larger sigma_a_eq + tensile sigma_m_eq',
   );
 
   let haigh: HaighData | undefined;
@@ -428,26 +456,48 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
         }
       } else {
         const lives = points.map((p, i) => {
-          const a = ctx.result(pointName('sigma_ar', p), { ...arC[i], notes: infoOnly(arC[i].notes) }, eqIns(p), {
-            range: critRange,
-            dim: 'stress',
-            meaning: `equivalent fully reversed stress of the chosen criterion at ${p.words}`,
-          });
+          const a = ctx.result(
+            pointName('sigma_ar', p),
+            { ...arC[i], notes: infoOnly(arC[i].notes) },
+            eqIns(p),
+            {
+              range: critRange,
+              dim: 'stress',
+              meaning: `equivalent fully reversed stress of the chosen criterion at ${p.words}`,
+            },
+          );
           if (a === null) return null;
           const life = lifeAtStress(line, a);
-          ctx.result(pointName('N_f', p), { ...life, notes: infoOnly(life.notes) }, [pointName('sigma_ar', p)], {
-            range: critRange,
-            meaning: `predicted cycles to failure at ${p.words}`,
-          });
+          ctx.result(
+            pointName('N_f', p),
+            { ...life, notes: infoOnly(life.notes) },
+            [pointName('sigma_ar', p)],
+            {
+              range: critRange,
+              meaning: `predicted cycles to failure at ${p.words}`,
+            },
+          );
           return { a, life };
         });
-        // Shortest life; a static failure (unbounded sigma_ar) governs before any life.
-        const g = governingIndex(
+        // Shortest life; a static failure (unbounded sigma_ar) governs before any life; with
+        // every life infinite, the larger sigma_ar.
+        let g = governingIndex(
           lives.map((l, i) =>
-            l === null ? (arC[i].infinite ? Number.NEGATIVE_INFINITY : null) : l.life.infinite ? null : l.life.value,
+            l === null
+              ? arC[i].infinite
+                ? Number.NEGATIVE_INFINITY
+                : null
+              : l.life.infinite
+                ? null
+                : l.life.value,
           ),
           'min',
         );
+        if (lives.every((l) => l?.life.infinite))
+          g = governingIndex(
+            lives.map((l) => -(l?.a ?? 0)),
+            'min',
+          );
         ar = ctx.result(
           'sigma_ar',
           withNote(arC[g], governingNote(ctx, 'sigma_ar', points, g, displays(ctx, 'sigma_ar', points))),

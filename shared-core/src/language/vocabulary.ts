@@ -142,7 +142,10 @@ const POINT_WORDS = {
 };
 for (const base of POINT_RESULT_BASES)
   for (const [k, words] of Object.entries(POINT_WORDS))
-    RESULT_NAMES[`${base}_${k}`] = { dim: RESULT_NAMES[base].dim, meaning: `${RESULT_NAMES[base].meaning}, ${words}` };
+    RESULT_NAMES[`${base}_${k}`] = {
+      dim: RESULT_NAMES[base].dim,
+      meaning: `${RESULT_NAMES[base].meaning}, ${words}`,
+    };
 
 export interface OptionInfo {
   meaning: string;

@@ -206,8 +206,10 @@ const SOURCE_MAX_POINT =
  * have opposite signs at the point.
  */
 export function pointEquivalentStresses(p: EquivalentStressInput): EquivalentStresses {
-  const fA = 'sigma_a_eq = sqrt((Kf*sigma_a + Kf_ax*sigma_ax_a/0.85)^2 + 3*(Kfs*tau_a)^2)  (signed components at the point)';
-  const fM = 'sigma_m_eq = sign(m) * sqrt(m^2 + 3*(Kfsm*tau_m)^2), m = Kfm*sigma_m + Kf_axm*sigma_ax_m  (at the point)';
+  const fA =
+    'sigma_a_eq = sqrt((Kf*sigma_a + Kf_ax*sigma_ax_a/0.85)^2 + 3*(Kfs*tau_a)^2)  (signed components at the point)';
+  const fM =
+    'sigma_m_eq = sign(m) * sqrt(m^2 + 3*(Kfsm*tau_m)^2), m = Kfm*sigma_m + Kf_axm*sigma_ax_m  (at the point)';
   const fMax =
     'sigma_max_eq = max over the instants +/- of sqrt((m +/- (Kf*sigma_a + Kf_ax*sigma_ax_a))^2 + 3*(Kfsm*tau_m +/- Kfs*tau_a)^2)';
 
