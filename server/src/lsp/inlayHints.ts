@@ -12,8 +12,8 @@ import { isContentLine, type NoteView, overlaps } from './locate';
 const MAX_PER_LINE = 4;
 /** Results shown first when a line drives many. */
 const KEY_RESULTS = ['n_f', 'n_y', 'N_f', 'S_f', 'D', 'repeats', 'N_eq', 'N_cg', 'N_insp', 'a_c'];
-/** Shown in the hover and the panel, not inline (they would crowd the criterion line). */
-const NOT_INLINE = /^(n_f_|sigma_ar$)/;
+/** Shown in the hover and the panel, not inline (they would crowd the criterion line); the per-fibre values (`n_y_neg` ...) too. */
+const NOT_INLINE = /^(n_f_|sigma_ar$)|_(pos|neg)$/;
 
 export function inlayHintsFor(view: NoteView, range: Range): InlayHint[] {
   const out: InlayHint[] = [];

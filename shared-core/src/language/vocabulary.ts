@@ -126,6 +126,32 @@ export const RESULT_NAMES: Record<string, NameInfo> = ownWords({
   cycles_counted: { dim: 'one', meaning: 'cycles counted in one pass of the history' },
 });
 
+/**
+ * Results of one extreme fibre of a section bent by a moment (checks/criticalPoints.ts):
+ * `_pos` at +M c/I (the fibre a positive moment puts in tension), `_neg` at -M c/I. The plain
+ * names hold the governing fibre's value.
+ */
+export const POINT_RESULT_BASES = [
+  'sigma_a_eq',
+  'sigma_m_eq',
+  'sigma_max_eq',
+  'n_y',
+  'n_f',
+  'sigma_ar',
+  'N_f',
+  'D',
+] as const;
+const POINT_WORDS = {
+  pos: 'at the extreme fibre at +M c/I (a positive moment puts it in tension)',
+  neg: 'at the extreme fibre at -M c/I (a positive moment puts it in compression)',
+};
+for (const base of POINT_RESULT_BASES)
+  for (const [k, words] of Object.entries(POINT_WORDS))
+    RESULT_NAMES[`${base}_${k}`] = {
+      dim: RESULT_NAMES[base].dim,
+      meaning: `${RESULT_NAMES[base].meaning}, ${words}`,
+    };
+
 export interface OptionInfo {
   meaning: string;
   /** Allowed words with their meanings; absent for free text or library keys. */
