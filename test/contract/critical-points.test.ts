@@ -158,13 +158,14 @@ describe('a non-rotating pin with the moment between two negative values (issue 
     near(si(c, 'n_y_neg'), Sy / (sa + sm));
   });
 
-  it('without `rotation:` the section is taken as rotating (one fibre, as before) and a warning offers `rotation: non-rotating`', () => {
+  it('without `rotation:` the section is taken as rotating (the largest moment fully reversed, Shigley 10th ed. Ex. 7-1) and a warning offers `rotation: non-rotating`', () => {
     const c = check(lines('-0.2 kN*m', '-1.3 kN*m').filter((l) => !l.startsWith('rotation:')));
     const w = c.diagnostics.find((x) => x.code === 'rotation-assumed');
     expect(w?.severity).toBe('warning');
     expect(w?.fixes?.[0].edits[0].newText).toBe('rotation: non-rotating\n');
-    // As before: the mean is read at the fibre of the sign of M (compressive), Se / sigma_a.
-    near(si(c, 'n_f'), Se / sa);
+    // Rotating: every fibre sees the largest moment fully reversed, Se / (|sigma_m| + sigma_a).
+    near(si(c, 'n_f'), Se / (sa + sm));
+    expect(si(c, 'sigma_m_eq')).toBe(0);
     // No mean moment: no warning.
     const z = check(lines('1.3 kN*m', '-1.3 kN*m').filter((l) => !l.startsWith('rotation:')));
     expect(codes(z)).not.toContain('rotation-assumed');

@@ -38,10 +38,7 @@ export interface SectionPoint {
 
 export const ONLY_POINT: SectionPoint = { key: null, s: 1, words: 'the checked point' };
 
-/** Whether the check's round section rotates (`rotation:`, rotating when not stated). */
-export function isRotating(ctx: CheckContext): boolean {
-  return (ctx.option('rotation') ?? 'rotating') === 'rotating';
-}
+export { isRotating } from './loads';
 
 const GEOMETRIC: Record<PointKey, string> = {
   pos: 'at +M c/I, `_pos`',
@@ -135,15 +132,15 @@ export function infoOnly(notes: MethodNote[] | undefined): MethodNote[] {
 
 /**
  * A round section with a mean moment and no `rotation:` stated is taken as rotating, where
- * the mean moment is read at one fibre only: say so, and offer `rotation: non-rotating` (both
- * fibres are then checked).
+ * the largest moment is fully reversed: say so, and offer `rotation: non-rotating` (both
+ * fibres are then checked with the mean moment).
  */
 export function warnRotationAssumed(ctx: CheckContext, meanMoment: number, range: Range): void {
   if (ctx.options.has('rotation') || meanMoment === 0) return;
   ctx.diag(
     'warning',
     'rotation-assumed',
-    'no `rotation:` stated: the section is taken as rotating, so the mean moment acts at one fibre with its own sign. If the section does not turn under the load (a pin, an axle, a bracket), state `rotation: non-rotating`: both extreme fibres are then checked, including the one the mean moment puts in tension',
+    'no `rotation:` stated: the section is taken as rotating, so the largest moment is fully reversed at every fibre (the conservative reading for fatigue). If the section does not turn under the load (a pin, an axle, a bracket), state `rotation: non-rotating`: both extreme fibres are then checked with the mean moment, and the size factor uses the equivalent diameter',
     range,
     [
       ctx.insertFix('State `rotation: non-rotating`', 'rotation: non-rotating'),

@@ -192,6 +192,13 @@ export function runDamage(ctx: CheckContext): MethodExtras {
       ? loadRange
       : (levels.find((l) => (l.loads.M?.m ?? 0) !== 0)?.stmt.whole ?? loadRange);
     warnRotationAssumed(ctx, mean, where);
+    if (history)
+      ctx.diag(
+        'warning',
+        'rotating-history',
+        'on a rotating shaft every revolution is a stress cycle: each cycle counted in the moment history is taken fully reversed at its largest moment, but a shaft that turns more often than the moment changes sees more cycles than the history holds. Count revolutions: state the levels as a spectrum (`spectrum: M_a = ..., n = revolutions`), or give the history of the bending stress at one fibre (`rotation: non-rotating`, `history-load: stress`)',
+        loadRange,
+      );
   }
   const chain = enduranceChain(ctx, st, sec.loadKind, sec.geometry, sec.hasAxial);
   const choice = chooseCriterion(ctx);
@@ -431,6 +438,9 @@ function historyPass(
   const states = sec.points.map((_, k) => ({
     cA: perA[k].sa * absScale,
     cM: perM[k].sm * h.scale,
+    // Amplitude per unit mean: nonzero where a mean load alternates at the point (the moment on
+    // a rotating shaft is fully reversed at every fibre, unitLoadStresses.ts).
+    cMa: perM[k].sa * absScale,
     acc: new MinerAccumulator(ev.line, ev.rule),
     bins: Array.from({ length: RANGE_BINS }, () => ({
       acc: new MinerAccumulator(ev.line, ev.rule),
@@ -445,7 +455,7 @@ function historyPass(
     let i = maxRange > 0 ? Math.floor((range / maxRange) * RANGE_BINS) : 0;
     if (i >= RANGE_BINS) i = RANGE_BINS - 1;
     for (const st of states) {
-      const sa = st.cA * range * 0.5;
+      const sa = st.cA * range * 0.5 + st.cMa * Math.abs(mean);
       const sm = shear ? Math.abs(st.cM * mean) : st.cM * mean;
       const eq = ev.model.equivalentReversed(sa, sm, ev.set);
       st.tally.add(eq.notes, count);

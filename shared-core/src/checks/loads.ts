@@ -215,6 +215,45 @@ function stressOf(
   return { a: a ?? 0, m: m ?? 0 };
 }
 
+/** Whether the check's round section rotates (`rotation:`, rotating when not stated). */
+export function isRotating(ctx: CheckContext): boolean {
+  return (ctx.option('rotation') ?? 'rotating') === 'rotating';
+}
+
+/**
+ * Bending stress of a rotating round section. A fibre of a shaft that turns under a moment
+ * passes through the tension and the compression side once a revolution, so a moment that is
+ * steady in space is completely reversed at every fibre, and a moment that varies slowly
+ * between `M_min` and `M_max` reverses the largest of them: amplitude 32 max|M| / (pi d^3),
+ * mean 0 (Budynas & Nisbett, Shigley's MED 10th ed., Sec. 6-14 and Ex. 7-1 to 7-3: the steady
+ * moment of a rotating shaft is taken as fully reversed, M_a = M, M_m = 0).
+ */
+function rotatingBending(ctx: CheckContext, M: Component, d: number, range: Range): Component {
+  const peak = Math.abs(M.m) + Math.abs(M.a);
+  const base = bendingStress(peak, d);
+  const a = ctx.result(
+    'sigma_a',
+    {
+      ...base,
+      formula: 'sigma_a = 32 * (|M_m| + |M_a|) / (pi * d^3)  (rotating: the largest moment is fully reversed at every fibre)',
+      source: "Budynas & Nisbett, Shigley's MED 10th ed., Sec. 6-14, Ex. 7-1: a steady moment on a rotating shaft is completely reversed",
+    },
+    ['M_a', 'M_m', 'd'],
+    { dim: 'stress', range },
+  );
+  ctx.result(
+    'sigma_m',
+    computed(
+      0,
+      'sigma_m = 0  (rotating: every fibre passes both sides of the moment each revolution)',
+      "Budynas & Nisbett, Shigley's MED 10th ed., Sec. 6-14, Ex. 7-1",
+    ),
+    ['M_m'],
+    { dim: 'stress', range },
+  );
+  return { a: a ?? 0, m: 0 };
+}
+
 export function nominalStresses(ctx: CheckContext): NominalStresses | null {
   const shellKind = ctx.option('shell') as 'cylinder' | 'sphere' | undefined;
   const feature = ctx.option('feature');
@@ -367,16 +406,9 @@ export function nominalStresses(ctx: CheckContext): NominalStresses | null {
   if (M || T || F) {
     const d = need(ctx, 'd', 'a load on a round section');
     if (d === undefined) return null;
-    if (M)
-      bending = stressOf(
-        ctx,
-        'sigma',
-        M,
-        (m) => bendingStress(m, d),
-        'M',
-        ctx.rangeOf(ctx.has('M_max') ? 'M_max' : 'M_a'),
-        ['d'],
-      );
+    const mRange = ctx.rangeOf(ctx.has('M_max') ? 'M_max' : 'M_a');
+    if (M && isRotating(ctx)) bending = rotatingBending(ctx, M, d, mRange);
+    else if (M) bending = stressOf(ctx, 'sigma', M, (m) => bendingStress(m, d), 'M', mRange, ['d']);
     if (T)
       torsion = stressOf(
         ctx,

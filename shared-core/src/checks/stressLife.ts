@@ -67,7 +67,7 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
   const rotating = s.geometry === 'round' && isRotating(ctx);
   const momentRange = ctx.rangeOf(ctx.has('M_max') ? 'M_max' : 'M_a');
   if (s.geometry === 'round' && s.bendingFromMoment && rotating)
-    warnRotationAssumed(ctx, s.bending.m, momentRange);
+    warnRotationAssumed(ctx, ctx.values.M_m?.si ?? 0, momentRange);
   const opRange = s.driver;
   const statedEq = ['sigma_a_eq', 'sigma_m_eq', 'sigma_max_eq'].some((n) => ctx.has(n));
   let points: SectionPoint[] = [ONLY_POINT];

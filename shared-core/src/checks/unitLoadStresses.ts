@@ -238,7 +238,7 @@ function vonMises2(s1: number, s2: number): number {
  * Equivalent amplitude and (signed) mean at the notch of one load level, Pa, at each point of
  * `sec.points` (in that order): the contract's combined-loading rule (von Mises, axial amplitude
  * / 0.85) as in a stress-life check, with the signed components at the point (a rotating section:
- * amplitudes added as magnitudes); in pure torsion the shear stresses themselves, the mean as a
+ * the largest moment fully reversed, amplitudes added as magnitudes); in pure torsion the shear stresses themselves, the mean as a
  * magnitude (the sign of a torque does not change its mean-stress effect: common practice, no
  * source); a plain shell by the von Mises stress of its membrane stresses, signed with their sum.
  */
@@ -267,11 +267,13 @@ export function notchEquivalent(sec: DamageSection, loads: LevelLoads): Array<{ 
   const T = scaled(sec, 'T', loads.T);
   const tau = scaled(sec, 'tau', loads.tau);
   return sec.points.map((pt) => {
+    // A rotating shaft reverses its largest moment at every fibre (loads.ts, rotatingBending).
+    const bend = sec.rotating ? { a: Math.abs(M.a) + Math.abs(M.m), m: 0 } : { a: pt.s * M.a, m: pt.s * M.m };
     const input = {
       ...c,
       // The moment's bending stress takes the point's sign; a stated stress is the point's own.
-      sigma_a: pt.s * M.a + sB.a,
-      sigma_m: pt.s * M.m + sB.m,
+      sigma_a: bend.a + sB.a,
+      sigma_m: bend.m + sB.m,
       sigma_ax_a: F.a + sX.a,
       sigma_ax_m: F.m + sX.m,
       tau_a: T.a + tau.a,
