@@ -235,8 +235,10 @@ function rotatingBending(ctx: CheckContext, M: Component, d: number, range: Rang
     'sigma_a',
     {
       ...base,
-      formula: 'sigma_a = 32 * (|M_m| + |M_a|) / (pi * d^3)  (rotating: the largest moment is fully reversed at every fibre)',
-      source: "Budynas & Nisbett, Shigley's MED 10th ed., Sec. 6-14, Ex. 7-1: a steady moment on a rotating shaft is completely reversed",
+      formula:
+        'sigma_a = 32 * (|M_m| + |M_a|) / (pi * d^3)  (rotating: the largest moment is fully reversed at every fibre)',
+      source:
+        "Budynas & Nisbett, Shigley's MED 10th ed., Sec. 6-14, Ex. 7-1: a steady moment on a rotating shaft is completely reversed",
     },
     ['M_a', 'M_m', 'd'],
     { dim: 'stress', range },
