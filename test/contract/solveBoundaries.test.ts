@@ -8,7 +8,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { CheckResult } from '../../shared-core/src';
-import { SOLVE_TOLERANCE } from '../../shared-core/src/design/solve';
+import { SOLVE_BUDGET, SOLVE_TOLERANCE } from '../../shared-core/src/design/solve';
 import { check, errors, si } from './helpers';
 
 const MM = 1e-3;
@@ -21,6 +21,11 @@ function at(lines: string[], name: string, x: number, unit = 'm'): CheckResult {
 
 function noRoot(c: CheckResult) {
   return c.diagnostics.find((d) => d.code === 'solve-no-root');
+}
+
+/** Evaluations the solver reports in the derivation of the solved input. */
+function evaluations(c: CheckResult, name: string): number {
+  return c.values[name].terms?.find((t) => t.name === 'evaluations of the check')?.value ?? Number.NaN;
 }
 
 /** A rotating shaft with a shoulder fillet, D and r in proportion to d (stated after d). */
@@ -114,6 +119,8 @@ describe("a published equation that steps: the size factor kb of Shigley's MED 9
     // The value shown is the lower side of the step, within the root finder's tolerance on d.
     expect(Math.abs(si(c, 'd') - 0.051)).toBeLessThan(1e-9);
     expect(Math.abs(si(c, 'n_f') - below)).toBeLessThan(1e-7 * below);
+    expect(c.values.d.source).toMatch(/Brent.*ch\. 5/);
+    expect(evaluations(c, 'd')).toBeLessThanOrEqual(SOLVE_BUDGET);
   });
 
   it('a target just off one side of the step, within the tolerance, is a root', () => {
@@ -211,6 +218,7 @@ describe('no root: the closest point is a refined minimum of |result - target|',
     expect(Math.abs(si(c, 'kd') - kd(TF))).toBeLessThan(1e-9);
     // A flat maximum: its place is known to about sqrt(1e-9) of the range.
     expect(Math.abs(si(c, 'temp') - 273.15 - TC)).toBeLessThan(0.5);
+    expect(evaluations(c, 'temp')).toBeLessThanOrEqual(SOLVE_BUDGET);
   });
 
   it('property: n_f over temp, a target above its maximum: the closest is no worse than a dense independent scan', () => {

@@ -1,5 +1,7 @@
 /**
- * Brent's root finder on a bracket: inverse quadratic interpolation and the secant step
+ * Brent's root finder and Brent's minimiser, for design mode.
+ *
+ * The root finder works on a bracket: inverse quadratic interpolation and the secant step
  * where they make progress, bisection where they do not, so it converges whenever the
  * function changes sign on the bracket (even across a jump, which it then closes in on).
  *

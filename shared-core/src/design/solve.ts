@@ -12,10 +12,16 @@
  *     decade, for sign changes of (SYMBOL - target);
  *  2. closes in on each sign change with Brent's method (Brent 1973, ch. 4; Press et al.,
  *     Numerical Recipes, 3rd ed., 9.3);
- *  3. answers the smallest root in the range (the rule for several roots: the smallest
+ *  3. the target is met where |SYMBOL - target| <= SOLVE_TOLERANCE |target|: a step of the
+ *     result that straddles the target within it is a root; a larger step across the target
+ *     (a method's range boundary: the two ranges of kb in Shigley Eq. 6-20 at 51 mm, the knee
+ *     of the S-N line) is a jump, reported with the result on both sides and the value of the
+ *     check whose method changes range there;
+ *  4. answers the smallest root in the range (the rule for several roots: the smallest
  *     value of the dimension, i.e. the lightest section or the smallest load), with a
- *     warning that lists the others; no root is an error that names the range searched
- *     and the closest value reached.
+ *     warning that lists the others; no root is an error that names the range searched, the
+ *     jumps, and the closest value: the best local minima of |SYMBOL - target| on the scan
+ *     refined by Brent's minimiser (Brent 1973, ch. 5), the best of all evaluations made.
  *
  * At most `SOLVE_BUDGET` evaluations of the block. The answer is recorded as the value
  * NAME (origin 'computed', formula `solved: SYMBOL(NAME) = target`) of the evaluation at
@@ -41,6 +47,10 @@ import { brentMinimize, brentRoot } from './brent';
 
 export const SOLVE_SOURCE =
   'bracketed root finding: scan of the physical range, then Brent\'s method (R. P. Brent, "Algorithms for Minimization without Derivatives", Prentice-Hall 1973, ch. 4; Press et al., "Numerical Recipes", 3rd ed., Sec. 9.3)';
+
+/** The source of a closest point when no root is found. */
+export const SOLVE_CLOSEST_SOURCE =
+  'closest point: Brent\'s minimiser of |SYMBOL - target| around the best points of the scan (R. P. Brent, "Algorithms for Minimization without Derivatives", Prentice-Hall 1973, ch. 5; Press et al., "Numerical Recipes", 3rd ed., Sec. 10.3)';
 
 /** Largest number of evaluations of the block for one solve (scan, Brent and the final one). */
 export const SOLVE_BUDGET = 200;
@@ -469,6 +479,7 @@ export function solveBlock(
       notes.push(`${symbol} jumps across the target at ${jumps.map((j) => fmt(j.hi.x)).join(', ')}`);
     record(entry.result, name, symbol, s, {
       formula: `closest: ${symbol}(${name}) = ${closest.symbolDisplay}, target ${targetText} not reached`,
+      source: SOLVE_CLOSEST_SOURCE,
       notes,
       evaluations: evaluations + 1,
     });
@@ -549,13 +560,13 @@ function record(
   name: string,
   symbol: string,
   s: SolveStatement,
-  how: { formula: string; notes: string[]; evaluations: number },
+  how: { formula: string; notes: string[]; evaluations: number; source?: string },
 ): void {
   const v: Value | undefined = result.values[name];
   if (!v) return;
   v.origin = 'computed';
   v.formula = how.formula;
-  v.source = SOLVE_SOURCE;
+  v.source = how.source ?? SOLVE_SOURCE;
   const sym = result.values[symbol];
   v.inputs = sym ? [{ name: symbol, display: sym.display }] : [];
   const terms: Term[] = [{ name: 'evaluations of the check', value: how.evaluations, unit: '' }];
