@@ -33,6 +33,12 @@ export const CYCLIC_CURVE_SOURCE =
 export const MASING_SOURCE =
   'Masing, Proc. 2nd Int. Congress Appl. Mech., Zurich 1926 (branches are the cyclic curve doubled); Dowling, Mechanical Behavior of Materials, 4th ed., Ch. 12 (from memory for the section)';
 
+/** Exponents outside these bounds describe no material (1/n' would overflow or the curve turn linear). */
+const N_PRIME_MIN = 0.01;
+const N_PRIME_MAX = 0.95;
+/** Largest ln of the plastic strain kept: strains beyond e^600 are absurd but stay finite in every product. */
+export const LN_STRAIN_CAP = 600;
+
 /** Published cyclic exponents of metals fall in this band (common practice, no source). */
 const N_PRIME_LO = 0.03;
 const N_PRIME_HI = 0.4;
@@ -43,8 +49,8 @@ export function cyclicCurveNotes(curve: CyclicCurve): MethodNote[] {
   const bad: string[] = [];
   if (!isFiniteNumber(curve.E) || !(curve.E > 0)) bad.push('E must be a positive modulus');
   if (!isFiniteNumber(curve.K_prime) || !(curve.K_prime > 0)) bad.push("K' must be a positive stress");
-  if (!isFiniteNumber(curve.n_prime) || !(curve.n_prime > 0) || !(curve.n_prime < 1))
-    bad.push("n' must lie between 0 and 1");
+  if (!isFiniteNumber(curve.n_prime) || !(curve.n_prime >= N_PRIME_MIN) || !(curve.n_prime <= N_PRIME_MAX))
+    bad.push(`n' must lie between ${N_PRIME_MIN} and ${N_PRIME_MAX}`);
   if (bad.length > 0) {
     notes.push({ code: 'cyclic-constants-invalid', severity: 'error', message: `${bad.join('; ')}.` });
     return notes;
@@ -73,7 +79,8 @@ export function isUsableCurve(curve: CyclicCurve): boolean {
 
 /** Plastic part (sigma/K')^(1/n') of the strain at a stress magnitude s >= 0. */
 function plasticStrain(curve: CyclicCurve, s: number): number {
-  return s > 0 ? (s / curve.K_prime) ** (1 / curve.n_prime) : 0;
+  if (!(s > 0)) return 0;
+  return Math.exp(Math.min(LN_STRAIN_CAP, Math.log(s / curve.K_prime) / curve.n_prime));
 }
 
 /** Strain on the cyclic curve at a signed stress (odd function), kernel. */

@@ -99,6 +99,7 @@ export {
   REVERSALS_DATA_MIN,
   reversalsKernel,
   STRAIN_LIFE_SOURCE,
+  type StrainLifeConstants,
   SWT_STRAIN_SOURCE,
   strainAmplitudeAt,
   strainAmplitudeKernel,

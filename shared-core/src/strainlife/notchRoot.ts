@@ -29,6 +29,7 @@ import {
   cyclicEnergy,
   cyclicStrain,
   cyclicYieldKernel,
+  LN_STRAIN_CAP,
   masingStrainRange,
 } from './cyclicCurve';
 import { increasingRoot } from './monotoneRoot';
@@ -45,29 +46,30 @@ export function notchSource(rule: NotchRule): string {
   return rule === 'glinka' ? GLINKA_SOURCE : NEUBER_SOURCE;
 }
 
-/** log-space power to avoid overflow: exp((n' ln(A) + ln(K')) / (1 + n')), the plastic bound of the root. */
-function plasticBound(curve: CyclicCurve, A: number): number {
-  const n = curve.n_prime;
-  return Math.exp((n * Math.log(A) + Math.log(curve.K_prime)) / (1 + n));
-}
-
-/** Notch-root stress magnitude on the cyclic curve for an elastic notch stress magnitude e = K |S|, kernel. */
+/**
+ * The root of either rule, solved for x = sigma / e in (0, 1] (the notch-root stress never exceeds
+ * the elastic one): dividing by e keeps e^2 from underflowing for tiny loads and from overflowing
+ * for absurd ones, so the solver works from 1e-300 Pa to far beyond fracture.
+ *
+ *   Neuber:  x^2 + x E (x e / K')^(1/n') / e = 1
+ *   Glinka:  x^2 + 2 E x (x e / K')^(1/n') / ((1 + n') e) = 1
+ *
+ * Both left sides increase with x. The plastic term alone reaching 1 bounds x from above:
+ * (x e)^(1 + 1/n') = C e^2 K'^(1/n') / E, C = 1 (Neuber) or (1 + n')/2 (Glinka), taken in logs.
+ */
 function rootStressMagnitude(curve: CyclicCurve, rule: NotchRule, e: number): number {
   if (!(e > 0)) return 0;
-  const E = curve.E;
-  if (rule === 'neuber') {
-    // sigma eps(sigma) = e^2/E: elastic bound sigma <= e, plastic bound sigma^(1+1/n') K'^(-1/n') <= e^2/E.
-    const A = (e * e) / E;
-    const hi = Math.min(e, plasticBound(curve, A));
-    const lo = Math.min(e / Math.SQRT2, plasticBound(curve, A / 2));
-    const target = A;
-    return increasingRoot((s) => s * cyclicStrain(curve, s) - target, lo, hi).x;
-  }
-  // W(sigma) = e^2/(2E): elastic bound sigma <= e, plastic bound sigma (sigma/K')^(1/n')/(1+n') <= e^2/(2E).
-  const B = (e * e) / (2 * E);
-  const hi = Math.min(e, plasticBound(curve, B * (1 + curve.n_prime)));
-  const lo = Math.min(e / Math.SQRT2, plasticBound(curve, (B * (1 + curve.n_prime)) / 2));
-  return increasingRoot((s) => cyclicEnergy(curve, s) - B, lo, hi).x;
+  const { E, K_prime: K, n_prime: n } = curve;
+  const C = rule === 'glinka' ? (1 + n) / 2 : 1;
+  const lnCoef = Math.log(rule === 'glinka' ? (2 * E) / (1 + n) : E) - Math.log(e);
+  // The plastic term in logs, capped like the strain itself, so that it stays finite for any load.
+  const g = (x: number) =>
+    x * x + Math.exp(Math.min(LN_STRAIN_CAP, lnCoef + Math.log(x) + Math.log((x * e) / K) / n)) - 1;
+  // ln(sigma_p) = (n ln(C e^2 / E) + ln K') / (1 + n): the plastic bound on the stress, in logs.
+  const lnBound = (lnC: number) => (n * (lnC + 2 * Math.log(e) - Math.log(E)) + Math.log(K)) / (1 + n);
+  const hi = Math.min(1, Math.exp(lnBound(Math.log(C)) - Math.log(e)));
+  const lo = Math.min(Math.SQRT1_2, Math.exp(lnBound(Math.log(C / 2)) - Math.log(e)));
+  return e * increasingRoot(g, lo, hi).x;
 }
 
 export interface NotchPoint {
