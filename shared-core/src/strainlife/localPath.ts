@@ -51,6 +51,14 @@ export interface PathPoint {
   eps: number;
   /** Index of the point the branch into this point is measured from; -1: first loading from zero on the cyclic curve. */
   origin: number;
+  /**
+   * `reversal`: a peak or valley of the nominal history. `closure`: the path passing an earlier
+   * reversal point again on its way to the next reversal (a loop closes there and the branch
+   * resumes the earlier one); kept so that a drawing follows the true branches. `closes` is the
+   * index of the point passed again.
+   */
+  kind: 'reversal' | 'closure';
+  closes?: number;
 }
 
 export interface LocalLoop {
@@ -161,6 +169,21 @@ class Tracer {
       if (Math.abs(S - top.S) < Math.abs(top.S - prev.S)) break;
       this.closeLoop(prev, top, 1);
       st.length -= 2;
+      if (S === prev.S) {
+        // The branch ends exactly where the loop closes: the new reversal is the earlier point's state.
+        const index = this.keep({ S, sigma: prev.sigma, eps: prev.eps, origin: top.index, kind: 'reversal' });
+        st.push({ S, sigma: prev.sigma, eps: prev.eps, index });
+        return;
+      }
+      // The branch from `top` passes `prev` (its state, by the Masing closure) and resumes the branch into `prev`.
+      this.keep({
+        S: prev.S,
+        sigma: prev.sigma,
+        eps: prev.eps,
+        origin: top.index,
+        kind: 'closure',
+        closes: prev.index,
+      });
     }
     const origin = st.length > 0 ? st[st.length - 1] : undefined;
     const p = this.reach(origin, S);
@@ -169,6 +192,7 @@ class Tracer {
       sigma: p.sigma,
       eps: p.eps,
       origin: origin === undefined ? -1 : origin.index,
+      kind: 'reversal',
     });
     st.push({ S, sigma: p.sigma, eps: p.eps, index });
   }
@@ -181,6 +205,7 @@ class Tracer {
       sigma: p.sigma,
       eps: p.eps,
       origin: origin === undefined ? -1 : origin.index,
+      kind: 'reversal',
     });
     return { S, sigma: p.sigma, eps: p.eps, index };
   }
@@ -434,7 +459,7 @@ export function traceConstantAmplitude(S_max: number, S_min: number, options: Pa
     const p = firstLoadingKernel(options.curve, options.rule, options.K * hi);
     return {
       ...emptyPath(notes, 1),
-      points: [{ S: hi, sigma: p.sigma, eps: p.eps, origin: -1 }],
+      points: [{ S: hi, sigma: p.sigma, eps: p.eps, origin: -1, kind: 'reversal' }],
       S_peak: hi,
       S_top: hi,
       S_bottom: hi,
@@ -474,10 +499,16 @@ export function pathSteps(path: LocalPath, rule: NotchRule, digits = 4): string[
   const rname = rule === 'glinka' ? 'Glinka' : 'Neuber';
   const f = (x: number) => Number(x.toPrecision(digits));
   return path.points.map((p, i) => {
+    const at = `S = ${f(p.S / MPA)} MPa`;
+    const where = `sigma = ${f(p.sigma / MPA)} MPa, eps = ${f(p.eps)}`;
+    if (p.kind === 'closure') {
+      const j = (p.closes ?? -1) + 1;
+      return `${i + 1}: ${at}, the branch from point ${p.origin + 1} reaches point ${j} again: the loop (${j}, ${p.origin + 1}) closes and the path resumes the branch into point ${j} (memory): ${where}`;
+    }
     const how =
       p.origin < 0
         ? `first loading on the cyclic curve (${rname})`
         : `Masing branch from point ${p.origin + 1} (S = ${f(path.points[p.origin].S / MPA)} MPa, ${rname} on the range)`;
-    return `${i + 1}: S = ${f(p.S / MPA)} MPa, ${how}: sigma = ${f(p.sigma / MPA)} MPa, eps = ${f(p.eps)}`;
+    return `${i + 1}: ${at}, ${how}: ${where}`;
   });
 }

@@ -12,15 +12,17 @@ import { findMaterial } from '../../src/materials';
 import { rainflow } from '../../src/rainflow';
 import {
   type CyclicCurve,
+  type LocalPath,
   type PathOptions,
   pathCurve,
   pathSteps,
   traceHistory,
   traceSpectrum,
 } from '../../src/strainlife';
-import { type Curve, neuberPoint, neuberRange } from './independent';
+import { type Curve, masingStrain, neuberPoint, neuberRange } from './independent';
 
 const ASTM_FIG6 = [-2, 1, -3, 5, -1, 3, -4, 4, -2];
+const reversals = (p: LocalPath) => p.points.filter((q) => q.kind === 'reversal');
 
 // RQC-100: K' = 903 MPa, n' = 0.0905, E = 200 GPa (Dowling, Mechanical Behavior of Materials,
 // 4th ed., Table 14.1, from memory); Sy = 683 MPa (Table 9.1, looked up).
@@ -63,7 +65,22 @@ describe('local path with memory on the ASTM E1049 Fig. 6 history', () => {
       ASTM_FIG6.map((x) => x * MPA),
       opts,
     );
-    expect(path.points.map((p) => p.S / MPA)).toEqual([5, -1, 3, -4, 4, -2, 1, -3, 5]);
+    expect(reversals(path).map((p) => p.S / MPA)).toEqual([5, -1, 3, -4, 4, -2, 1, -3, 5]);
+    // With the points where the path passes an earlier reversal again (loop closures, memory).
+    expect(path.points.map((p) => `${p.S / MPA}${p.kind === 'closure' ? 'c' : ''}`)).toEqual([
+      '5',
+      '-1',
+      '3',
+      '-1c',
+      '-4',
+      '4',
+      '-2',
+      '1',
+      '-2c',
+      '-3',
+      '4c',
+      '5',
+    ]);
     expect(path.S_peak / MPA).toBe(5);
   });
 
@@ -84,16 +101,34 @@ describe('local path with memory on the ASTM E1049 Fig. 6 history', () => {
       opts,
     );
     const hand = handTrace(u);
-    expect(path.points.length).toBe(9);
-    path.points.forEach((p, i) => {
+    const rev = reversals(path);
+    expect(rev.length).toBe(9);
+    rev.forEach((p, i) => {
       expect(p.sigma / MPA).toBeCloseTo(hand.points[i].sigma / MPA, 6);
       expect(p.eps).toBeCloseTo(hand.points[i].eps, 11);
     });
     // Plastic indeed: the first peak's strain is beyond the elastic Kt S / E.
     expect(path.points[0].eps).toBeGreaterThan(((Kt * 5 * u) / curve.E) * 1.05);
-    // Memory: -4 is reached on the branch from 5, -3 on the branch from 4.
-    expect(path.points[3].origin).toBe(0);
-    expect(path.points[7].origin).toBe(4);
+    // Memory: -4 is reached on the branch from 5, -3 on the branch from 4, the last 5 on the branch from -4.
+    expect(path.points[4].origin).toBe(0);
+    expect(path.points[9].origin).toBe(5);
+    expect(path.points[11].origin).toBe(4);
+    // A closure point is exactly the earlier reversal's state, reached on the branch from the loop's other end.
+    expect(path.points[3]).toMatchObject({
+      sigma: path.points[1].sigma,
+      eps: path.points[1].eps,
+      origin: 2,
+      closes: 1,
+    });
+    expect(path.points[10]).toMatchObject({
+      sigma: path.points[5].sigma,
+      eps: path.points[5].eps,
+      origin: 9,
+      closes: 5,
+    });
+    // ... and lies on that branch: the Masing range from 3 down to -1, solved in the test.
+    const r = neuberRange(ref, Kt * 4 * u);
+    expect(path.points[3].sigma / MPA).toBeCloseTo((path.points[2].sigma - r.dSigma) / MPA, 6);
   });
 
   it('the closed loops and their local max/mean stresses match the hand trace', () => {
@@ -129,7 +164,7 @@ describe('local path with memory on the ASTM E1049 Fig. 6 history', () => {
       ASTM_FIG6.map((x) => x * 50 * MPA),
       opts,
     );
-    const rf = rainflow(path.points.map((p) => p.eps));
+    const rf = rainflow(reversals(path).map((p) => p.eps));
     const counted = new Map<string, number>();
     for (const c of rf.cycles!)
       counted.set(c.range.toPrecision(9), (counted.get(c.range.toPrecision(9)) ?? 0) + c.count);
@@ -145,7 +180,8 @@ describe('local path with memory on the ASTM E1049 Fig. 6 history', () => {
     );
     const steps = pathSteps(path, 'neuber');
     expect(steps[0]).toMatch(/^1: S = 250 MPa, first loading on the cyclic curve \(Neuber\)/);
-    expect(steps[3]).toMatch(/Masing branch from point 1/);
+    expect(steps[3]).toMatch(/reaches point 2 again: the loop \(2, 3\) closes/);
+    expect(steps[4]).toMatch(/Masing branch from point 1/);
     const pts = pathCurve(path, curve, 8);
     expect(pts.length).toBe(1 + 8 * path.points.length);
     path.points.forEach((p, i) => {
@@ -153,6 +189,22 @@ describe('local path with memory on the ASTM E1049 Fig. 6 history', () => {
       expect(pts[(i + 1) * 8][1]).toBeCloseTo(p.eps, 14);
     });
     for (const [s, e] of pts) expect(Number.isFinite(s) && Number.isFinite(e)).toBe(true);
+  });
+});
+
+describe('drawing the loops', () => {
+  it('the last segment (from the closure at 4 up to 5) follows the Masing branch from -4, not the cyclic curve', () => {
+    const path = traceHistory(
+      ASTM_FIG6.map((x) => x * 50 * MPA),
+      opts,
+    );
+    const n = 10;
+    const pts = pathCurve(path, curve, n);
+    const o = path.points[4]; // -4
+    for (let i = 1; i < n; i++) {
+      const [sigma, eps] = pts[11 * n + i];
+      expect(eps).toBeCloseTo(o.eps + masingStrain(ref, sigma - o.sigma), 12);
+    }
   });
 });
 
@@ -238,10 +290,11 @@ describe('properties (fast-check)', () => {
         );
         if (p.points.length === 0) return;
         for (const q of p.points) expect(Number.isFinite(q.sigma) && Number.isFinite(q.eps)).toBe(true);
-        const first = p.points[0];
-        const last = p.points[p.points.length - 1];
+        const rev = reversals(p);
+        const first = rev[0];
+        const last = rev[rev.length - 1];
         expect(Math.abs(last.eps - first.eps)).toBeLessThan(1e-9 * Math.max(1e-6, Math.abs(first.eps)));
-        expect(p.loops.length).toBe((p.points.length - 1) / 2);
+        expect(p.loops.length).toBe((rev.length - 1) / 2);
         if (rule === 'neuber')
           for (const l of p.loops) {
             const r = neuberRange(ref, Kt * l.dS);
@@ -260,7 +313,7 @@ describe('properties (fast-check)', () => {
           opts,
         );
         if (p.points.length === 0) return;
-        const rf = rainflow(p.points.map((q) => q.S));
+        const rf = rainflow(reversals(p).map((q) => q.S));
         const total = rf.cycles!.reduce((s, c) => s + c.count * c.range, 0);
         const loops = p.loops.reduce((s, l) => s + l.dS, 0);
         expect(loops / total).toBeCloseTo(1, 10);
