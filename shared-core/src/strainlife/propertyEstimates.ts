@@ -26,7 +26,10 @@
  *
  * The coefficients above are checked in the tests against the estimates published for one
  * steel in "Comparison of Fatigue Property Estimation Methods with Physical Test Data",
- * Metals 15 (2025) 780, Sec. 4 table.
+ * Metals 15 (2025) 780, Sec. 4 table (looked up): sigma_f', b, c of the modified universal
+ * slopes, all four strain-life constants of the uniform material law's steel set, and sigma_f',
+ * eps_f' of the hardness method. The rest is from memory: the universal-slopes ductility term,
+ * psi, the law's K', n' and its aluminium and titanium set, the hardness range and Su = 3.45 HB.
  */
 import { type Computed, computed, isFiniteNumber, type MethodNote, MPA, type Term } from '../computed';
 import type { CyclicCurve } from './cyclicCurve';
