@@ -1,2 +1,2 @@
-export type { Material, MaterialClass } from './library';
+export type { CyclicProperties, Material, MaterialClass } from './library';
 export { editDistance, findMaterial, MATERIALS, nearestMaterialKeys } from './library';
