@@ -117,6 +117,7 @@ function describeWord(
 export function derivation(v: Value, digits = 4): string {
   const out: string[] = [];
   out.push(`**\`${v.name}\`** = **${v.display}** · ${v.meaning}`);
+  if (v.unused) out.push(`*Not used:* ${v.unused}.`);
   if (v.origin === 'stated' && v.tool) {
     out.push(
       `Stated in the note: \`${v.expression ?? v.display}\` = **${v.display}**. The tool's own value: **${v.tool.display}**` +

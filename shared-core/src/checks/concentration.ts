@@ -128,7 +128,11 @@ function notchSensitivity(
   if (ctx.has(name)) return ctx.input(name)!;
   const model = ctx.option('notch-sensitivity') ?? 'neuber';
   const load = shear ? 'shear' : 'normal';
-  const c = model === 'peterson' ? petersonSensitivity(r, Sut, cls, load) : neuberSensitivity(r, Sut, load);
+  // Peterson knows fewer classes than the families: the others get its conservative answer (q = 1) and an error.
+  const c =
+    model === 'peterson'
+      ? petersonSensitivity(r, Sut, cls as Parameters<typeof petersonSensitivity>[2], load)
+      : neuberSensitivity(r, Sut, load);
   return ctx.result(name, c, ['r', 'Sut'], { range: ctx.rangeOf(rangeName) });
 }
 
@@ -185,16 +189,19 @@ export function concentration(
     const shear = mode === 'torsion';
     const featureRange = ctx.optionRange('feature') ?? ctx.header;
     let Kf: number | null;
-    if (ctx.has(kfName) && !ctx.has(ktName)) {
+    if (ctx.has(kfName)) {
+      // A stated Kf ends the Kt / q chain: nothing of it is asked for, and what is stated of it shows as not used.
       Kf = ctx.input(kfName)!;
+      ctx.replaced(kfName, [ktName, shear ? 'qs' : 'q', 'r', 'D', 'd_hole', 'w_c', 'h_c']);
     } else {
       // Kt: the fit, then a stated value overrides it (both kept).
       let Kt: number | null = null;
       let r: number | undefined;
       let fitInputs: string[] = [];
       if (s.geometry === 'shell' && feature === 'shell-cutout') {
-        const w = positive(ctx, 'w_c', 'a shell cutout');
-        const h = positive(ctx, 'h_c', 'a shell cutout');
+        // A stated Kt ends the fit: its dimensions are not asked for.
+        const dims = () => [positive(ctx, 'w_c', 'a shell cutout'), positive(ctx, 'h_c', 'a shell cutout')];
+        const [w, h] = ctx.has(ktName) ? ctx.replacedBy(ktName, dims) : dims();
         if (w !== undefined && h !== undefined) {
           const c = shellCutoutKt(w, h, s.shell?.kind === 'sphere' ? 1 : 0.5);
           Kt = ctx.result(ktName, c, ['w_c', 'h_c'], { range: featureRange });
@@ -202,7 +209,9 @@ export function concentration(
           r = ctx.input('r') ?? (rho ? rho.value * (rho.unit === 'mm' ? 1e-3 : 1) : Math.min(w, h) / 2);
         } else if (ctx.has(ktName)) Kt = ctx.input(ktName)!;
       } else if (feature && feature !== 'none') {
-        const fit = fitKt(ctx, feature, mode);
+        const fit = ctx.has(ktName)
+          ? ctx.replacedBy(ktName, () => fitKt(ctx, feature, mode))
+          : fitKt(ctx, feature, mode);
         if (fit) {
           fitInputs = fit.inputs;
           r = fit.r;
@@ -268,14 +277,7 @@ export function concentration(
             },
           );
         } else {
-          q = notchSensitivity(
-            ctx,
-            shear,
-            r ?? 0,
-            Sut,
-            ctx.options.has('material') ? cls : 'steel',
-            ctx.has('r') ? 'r' : ktName,
-          );
+          q = notchSensitivity(ctx, shear, r ?? 0, Sut, cls, ctx.has('r') ? 'r' : ktName);
         }
       }
       if (q === null) {
