@@ -170,7 +170,9 @@ function optionKeyDoc(key: string, check: CheckResult, line: number): string {
     .map((n) => check.values[n])
     .filter((v) => v.origin !== 'stated' && v.range && v.range.start.line === line);
   if (driven.length > 0)
-    out.push(`Drives here: ${driven.map((v) => `${v.name} = ${v.display} (${v.meaning})`).join(', ')}`);
+    out.push(
+      `Drives here: ${driven.map((v) => `${v.name} = ${v.display} (${v.meaning}${v.unused ? '; not used' : ''})`).join(', ')}`,
+    );
   return out.join('\n\n');
 }
 

@@ -280,18 +280,15 @@ export function enduranceChain(
   let S: number | null = null;
   let N_ref: number | undefined = 1e6;
   if (hasEndurance) {
-    if (ctx.has('Sf_ref') || ctx.has('N_ref')) {
+    const reference = ['Sf_ref', 'N_ref', 'S_ref'].filter((n) => ctx.has(n));
+    if (reference.length > 0) {
       ctx.diag(
         'warning',
         'reference-strength-unused',
-        `\`${st.family}\` has an endurance limit: \`Sf_ref\`/\`N_ref\` are not used (state \`Se_prime\`, or the family of a material without one)`,
-        ctx.rangeOf(ctx.has('Sf_ref') ? 'Sf_ref' : 'N_ref'),
+        `\`${st.family}\` has an endurance limit: ${reference.map((n) => `\`${n}\``).join(', ')} not used (state \`Se_prime\` or \`Se\`, or the family of a material without one)`,
+        ctx.rangeOf(reference[0]),
       );
-      ctx.replaced(
-        'Se_prime',
-        ['Sf_ref', 'N_ref'],
-        `\`${st.family}\` has an endurance limit: Se_prime is used`,
-      );
+      ctx.replaced('Se', reference, `\`${st.family}\` has an endurance limit: Se_prime and Se are used`);
     }
     // Se_prime from Sut by family; a stated Se_prime ends that estimate (kept as the tool's own value).
     const estimate = () =>
