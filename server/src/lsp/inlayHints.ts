@@ -43,7 +43,9 @@ function hintsOfCheck(view: NoteView, c: CheckResult, range: Range, out: InlayHi
     const ranked = values.slice().sort((a, b) => rank(a.name) - rank(b.name));
     const shown = ranked.slice(0, MAX_PER_LINE);
     const parts = shown.map((v) =>
-      v.origin === 'stated' && v.tool ? `tool ${v.tool.display}` : `${v.name} ${v.display}`,
+      v.origin === 'stated' && v.tool
+        ? `tool ${v.tool.display}`
+        : `${v.name} ${v.display}${v.unused ? ' (not used)' : ''}`,
     );
     if (ranked.length > shown.length) parts.push('…');
     out.push({

@@ -3,7 +3,8 @@
  * names, units and options, runs the check's method, then its requirements. Never throws:
  * whatever goes wrong inside one check becomes a diagnostic of that check.
  */
-import { runCheckMethod } from '../checks/runMethod';
+import { reviewCheck, runCheckMethod } from '../checks/runMethod';
+import { findMaterial, nearestMaterialKeys } from '../materials';
 import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import type { UnitSystem } from '../units/format';
 import type { Unit } from '../units/mathInstance';
@@ -12,11 +13,12 @@ import { CheckContext, type HistoryChunkReader, type StatedInput } from './check
 import { ExpressionError, evaluateExpression, type Quantity, rawFromSI, type Scope } from './expressions';
 import { type BlockSource, findFatigueBlocks, ID_PATTERN, splitLines } from './markdownBlocks';
 import { BlockSequence } from './noteLoop';
+import { checkConsistency, valuePlausibility } from './plausibility';
 import { evaluateRequirements } from './requirements';
 import { type AssignStatement, type OptionStatement, parseStatements, type Statement } from './statements';
 import { type CheckResult, type Diagnostic, lineRange, type Method, type NoteResult, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
-import { editDistance, INPUT_NAMES, MAGNITUDE, nearest, OPTIONS, POSITIVE, RESULT_NAMES } from './vocabulary';
+import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from './vocabulary';
 
 export interface EvaluateOptions {
   /** Display units; 'auto' follows the units the note is written in. */
@@ -102,7 +104,8 @@ export function evaluateBlock(
       stated.set(name, input);
       ctx.recordStated(name, input.q, input.stmt, classify(input.q.dim));
     }
-    const faults = readStatements(ctx, statements, scope, raw);
+    // Values that cannot be physical, read against each other, the library and the family.
+    const faults = readStatements(ctx, statements, scope, raw) + checkConsistency(ctx);
     const title = optionMap.get('title')?.value.text;
     if (title) result.title = title;
     result.method = (ctx.option('method') as Method | undefined) ?? 'stress-life';
@@ -125,6 +128,7 @@ export function evaluateBlock(
     const requireStatements = statements.filter((s) => s.kind === 'require');
     const hasErrors = ctx.diagnostics.some((d) => d.severity === 'error');
     result.requirements = evaluateRequirements(ctx, requireStatements, scope, faults > 0);
+    if (faults === 0) reviewCheck(ctx, result.method, result.requirements, requireStatements);
     if (hasErrors) result.status = 'error';
     else if (result.requirements.length === 0) result.status = 'unchecked';
     else if (result.requirements.some((r) => r.met === null)) result.status = 'error';
@@ -267,6 +271,22 @@ function readOption(ctx: CheckContext, s: OptionStatement): void {
     return;
   }
   ctx.options.set(key, s);
+  if (key === 'material' && !findMaterial(s.value.text)) {
+    // A key the library does not have: the strengths and the family would be guessed.
+    const near = nearestMaterialKeys(s.value.text, 3);
+    ctx.diag(
+      'error',
+      'unknown-material',
+      `\`${s.value.text}\` is not in the material library${near.length ? `: did you mean ${near.map((k) => `\`${k}\``).join(', ')}?` : ''}`,
+      s.value.range,
+      near.map((k, i) => ({
+        title: `Change to \`${k}\``,
+        edits: [{ range: s.value.range, newText: k }],
+        preferred: i === 0,
+      })),
+    );
+    return;
+  }
   if (info.values && !(s.value.text in info.values)) {
     const choices = Object.keys(info.values);
     const near = nearest(s.value.text, choices, 3);
@@ -387,10 +407,11 @@ function readAssign(
       return;
     }
     dim = info.dim === 'paris' ? 'one' : info.dim;
-    const bad = implausible(name, q.si, dim);
+    const shownDim = dim;
+    const bad = valuePlausibility(name, q.si, dim, (x) => ctx.display(x, shownDim));
     if (bad) {
-      ctx.diag('error', 'absurd-value', `\`${name}\` ${bad}`, s.expr.range);
-      return;
+      ctx.diag(bad.severity, 'absurd-value', `\`${name}\` ${bad.message}`, s.expr.range);
+      if (bad.severity === 'error') return;
     }
   }
   raw.set(name, q.raw);
@@ -427,18 +448,6 @@ const UNIT_SLIPS: Record<string, string> = {
   MM: 'mm',
   deg: 'degC or degF',
 };
-
-/** Why a stated reserved value cannot be a real input, or undefined when it can. */
-function implausible(name: string, si: number, dim: DimKey): string | undefined {
-  if (POSITIVE.has(name) && !(si > 0)) return 'must be positive';
-  if (name === 'reliability' && si >= 1) return 'must be below 1 (e.g. 0.99 or 99 %)';
-  const m = MAGNITUDE[dim];
-  if (!m) return undefined;
-  const a = Math.abs(si);
-  if (a > m.max || (a > 0 && a < m.min))
-    return `= ${si.toExponential(3)} (SI) is not a plausible value: expected ${m.label}; check the unit`;
-  return undefined;
-}
 
 /** A value of an earlier check as a mathjs value, built on first use (most are never referenced). */
 export function memberValue(entry: CheckScopeEntry | undefined, name: string): Unit | number | undefined {

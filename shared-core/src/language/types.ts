@@ -73,6 +73,11 @@ export interface Value {
   notes?: string[];
   /** Why a default was taken (for the assumptions register). */
   assumption?: string;
+  /**
+   * Why the value does not act on the results, when a stated value replaces the chain it
+   * belongs to (e.g. `the stated Se replaces it` on ka ... kmisc): shown as "not used".
+   */
+  unused?: string;
 }
 
 export interface RequirementResult {

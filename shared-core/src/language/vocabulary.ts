@@ -3,6 +3,7 @@
  * result names, and option keys with their values. Completion, hover, diagnostics and the
  * docs all read this one table.
  */
+import { FAMILIES, FAMILY_WORDS } from '../materials/families';
 import type { DimKey } from '../units/dimensions';
 
 export interface NameInfo {
@@ -23,6 +24,12 @@ export const INPUT_NAMES: Record<string, NameInfo> = ownWords({
   Sut: { dim: 'stress', meaning: 'ultimate tensile strength' },
   Sy: { dim: 'stress', meaning: 'tensile yield strength' },
   Se_prime: { dim: 'stress', meaning: 'endurance limit of the polished rotating-beam specimen' },
+  Sf_ref: {
+    dim: 'stress',
+    meaning:
+      'fatigue strength of the rotating-beam specimen at the reference life N_ref (no endurance limit)',
+  },
+  N_ref: { dim: 'one', meaning: 'reference life of Sf_ref, in cycles (e.g. 5e8 for aluminium tables)' },
   f: { dim: 'one', meaning: 'fatigue strength fraction at 10^3 cycles' },
   sigma_f_prime: { dim: 'stress', meaning: 'Basquin fatigue strength coefficient' },
   b_basquin: { dim: 'one', meaning: 'Basquin exponent (negative)' },
@@ -89,7 +96,6 @@ export const INPUT_NAMES: Record<string, NameInfo> = ownWords({
 export const RESULT_NAMES: Record<string, NameInfo> = ownWords({
   Se: { dim: 'stress', meaning: 'corrected endurance limit (Marin)' },
   S_ref: { dim: 'stress', meaning: 'corrected fatigue strength at the reference life (no endurance limit)' },
-  Sf_ref: { dim: 'stress', meaning: 'rotating-beam fatigue strength at the reference life (library)' },
   Sse: { dim: 'stress', meaning: 'corrected torsional endurance limit' },
   Ssu: { dim: 'stress', meaning: 'ultimate shear strength (0.67 Sut)' },
   sigma_a_eq: { dim: 'stress', meaning: 'von Mises equivalent alternating stress' },
@@ -162,6 +168,11 @@ export interface OptionInfo {
 const OPTION_TABLE: Record<string, OptionInfo> = {
   title: { meaning: 'title of the check (free text)' },
   material: { meaning: 'a key of the material library (strengths, class, source)' },
+  'material-family': {
+    meaning:
+      'what the material is when its strengths are stated without a library key: decides the endurance route and the notch-sensitivity data',
+    values: Object.fromEntries(FAMILY_WORDS.map((w) => [w, FAMILIES[w].meaning])),
+  },
   surface: {
     meaning: 'surface finish at the checked section, for the surface factor ka',
     values: {
@@ -344,6 +355,10 @@ export const POSITIVE = new Set([
   'Sut',
   'Sy',
   'Se_prime',
+  'Se',
+  'Sf_ref',
+  'S_ref',
+  'N_ref',
   'sigma_f_prime',
   'f',
   'ka',

@@ -10,7 +10,20 @@
  * and a rotating-beam fatigue strength `Sf_ref` at `N_ref` cycles instead.
  */
 
-export type MaterialClass = 'steel' | 'stainless' | 'cast-iron' | 'aluminium' | 'titanium';
+/**
+ * The class of a material: one per family of `material-family:` (see `families.ts`). It decides
+ * the endurance estimate, whether an endurance limit exists, and the notch-sensitivity data.
+ * `aluminium` is the wrought aluminium alloys.
+ */
+export type MaterialClass =
+  | 'steel'
+  | 'stainless'
+  | 'cast-iron'
+  | 'aluminium'
+  | 'aluminium-cast'
+  | 'titanium'
+  | 'copper'
+  | 'magnesium';
 
 export interface Material {
   /** Kebab-case library key, e.g. `aisi-1045-cd`. */

@@ -48,10 +48,14 @@ export function isAssumptionCode(code: string): boolean {
 const OPTION_USED: Record<string, (c: CheckResult) => boolean> = {
   criterion: () => false, // announced by the `no-criterion` diagnostic instead
   rotation: (c) =>
-    c.values.kb?.origin === 'computed' && (c.values.kb.inputs ?? []).some((i) => i.name === 'd'),
+    c.values.kb?.origin === 'computed' &&
+    !c.values.kb.unused &&
+    (c.values.kb.inputs ?? []).some((i) => i.name === 'd'),
   'load-line': (c) =>
     c.method === 'stress-life' && c.values.n_f !== undefined && c.values.n_f.origin !== 'stated',
-  'notch-sensitivity': (c) => c.values.q?.origin === 'computed' || c.values.qs?.origin === 'computed',
+  'notch-sensitivity': (c) =>
+    (c.values.q?.origin === 'computed' && !c.values.q.unused) ||
+    (c.values.qs?.origin === 'computed' && !c.values.qs.unused),
   'mean-concentration': (c) =>
     c.values.n_f !== undefined &&
     ['Kf', 'Kfs', 'Kf_ax'].some((k) => c.values[k]?.si !== null && (c.values[k]?.si ?? 1) > 1),
@@ -81,7 +85,8 @@ export function assumptionsRegister(note: NoteResult, text?: string): Assumption
     const byName = new Map<string, AssumptionEntry>();
     for (const name of c.order) {
       const v = c.values[name];
-      if (v?.origin !== 'default') continue;
+      // A default in a chain that a stated value replaced assumes nothing.
+      if (v?.origin !== 'default' || v.unused) continue;
       const e: AssumptionEntry = {
         check: c.id,
         checkLine,
