@@ -302,6 +302,19 @@ export function weldLife(curve: WeldSnCurve, range: number, loading: WeldLoading
       ],
     );
   const N = lifeKernel(curve, range, loading);
+  if (!(N < 1e300))
+    return infinite(
+      'N = N_D (Delta sigma_D / Delta sigma)^m2',
+      curve.source,
+      [...terms, numTerm('m2', m2)],
+      [
+        {
+          code: 'infinite',
+          severity: 'information',
+          message: 'The life overflows any count of cycles: treated as infinite.',
+        },
+      ],
+    );
   return computed(N, 'N = N_D (Delta sigma_D / Delta sigma)^m2', curve.source, [...terms, numTerm('m2', m2)]);
 }
 
@@ -311,9 +324,9 @@ export function weldStrengthAtLife(curve: WeldSnCurve, N: number, loading: WeldL
   const terms: Term[] = [numTerm('N', Number.isFinite(N) ? N : 0), ...curveTerms(curve)];
   const formula = 'Delta sigma_R = Delta sigma_C (N_C / N)^(1/m1)';
   if (bad.length > 0) return computed(0, formula, curve?.source ?? '', terms, bad);
-  if (!isPositive(N))
+  if (!isPositive(N) || N < 1 || N > 1e300)
     return computed(0, formula, curve.source, terms, [
-      inputError('The life N must be a positive number of cycles.'),
+      inputError('The life N must be a number of cycles from 1 up.'),
     ]);
   const notes: MethodNote[] = [];
   if (N < N_LOW_END)

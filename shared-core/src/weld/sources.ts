@@ -49,7 +49,7 @@ export const IIW_RATIO_SOURCE =
   ', Sec. 3.3.4 "Enhancement factor f(R)" (from memory; the same in ' +
   IIW_2008 +
   ' Sec. 3.3.4): case I stress-relieved or negligible residual stress: f(R) = 1.6 for R < -1, -0.4 R + 1.2 for -1 <= R <= 0.5, 1 for R > 0.5; ' +
-  'case II small-scale thin-walled elements with short welds: f(R) = 1.3 for R < -1, -0.4 R + 0.9 for -1 <= R <= 0.25, 1 for R > 0.25; ' +
+  'case II small-scale thin-walled elements with short welds: f(R) = 1.3 for R < -1, -0.4 R + 0.9 for -1 <= R <= -0.25, 1 for R > -0.25; ' +
   'case III complex welded components, global residual stresses, thick walls (as welded): f(R) = 1';
 export const EN_COMPRESSIVE_SOURCE =
   EN1993_1_9 +

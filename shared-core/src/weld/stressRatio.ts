@@ -89,10 +89,10 @@ export function iiwStressRatioFactor(
       terms,
     );
   }
-  const f = r < -1 ? 1.3 : r <= 0.25 ? -0.4 * r + 0.9 : 1;
+  const f = r < -1 ? 1.3 : r <= -0.25 ? -0.4 * r + 0.9 : 1;
   return computed(
     f,
-    'case II: f(R) = 1.3 (R < -1), -0.4 R + 0.9 (-1 <= R <= 0.25), 1 (R > 0.25)',
+    'case II: f(R) = 1.3 (R < -1), -0.4 R + 0.9 (-1 <= R <= -0.25), 1 (R > -0.25)',
     IIW_RATIO_SOURCE,
     terms,
   );
