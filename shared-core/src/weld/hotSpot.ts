@@ -73,10 +73,10 @@ export function hotSpotStress(scheme: HotSpotScheme, stresses: number[], t?: num
         `The ${scheme} scheme needs ${def.coefficients.length} surface stresses, at ${positionsText(def)}.`,
       ),
     );
-  else if (!stresses.every(isFiniteNumber))
-    errors.push(inputError('Every surface stress must be a finite stress.'));
-  if (def.relative && t !== undefined && !isPositive(t))
-    errors.push(inputError('The plate thickness t must be a positive length.'));
+  else if (!stresses.every((x) => isFiniteNumber(x) && Math.abs(x) <= 1e12))
+    errors.push(inputError('Every surface stress must be a finite stress (at most 1e6 MPa).'));
+  if (def.relative && t !== undefined && !(isPositive(t) && t >= 1e-4 && t <= 1))
+    errors.push(inputError('The plate thickness t must lie between 0.1 mm and 1 m.'));
   if (errors.length > 0) return computed(0, def.formula, HOT_SPOT_SOURCE, undefined, errors);
   const terms = stresses.map((s, i) =>
     mpaTerm(def.relative ? `sigma(${def.positions[i]} t)` : `sigma(${def.positions[i]} mm)`, s),

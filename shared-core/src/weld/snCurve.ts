@@ -53,6 +53,12 @@ export const N_C = 2e6;
 
 function classErrors(deltaC: number, what: string): MethodNote[] {
   if (!isPositive(deltaC)) return [inputError(`The ${what} must be a positive stress range.`)];
+  if (deltaC < 1 * MPA)
+    return [
+      inputError(
+        `The ${what} ${mpaText(deltaC)} is below any class of the standards (they start near 10 MPa): check the unit.`,
+      ),
+    ];
   if (deltaC > 1000 * MPA)
     return [
       inputError(

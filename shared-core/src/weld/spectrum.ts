@@ -103,7 +103,16 @@ export class WeldDamageAccumulator {
   readonly onCycle = (range: number, _mean: number, count: number): void => this.add(range, count);
 
   add(range: number, count: number): void {
-    if (!(Number.isFinite(range) && Number.isFinite(count) && range >= 0 && count >= 0)) {
+    if (
+      !(
+        Number.isFinite(range) &&
+        Number.isFinite(count) &&
+        range >= 0 &&
+        count >= 0 &&
+        range <= 1e12 &&
+        count <= 1e20
+      )
+    ) {
       this.invalid++;
       return;
     }
@@ -184,7 +193,7 @@ export class WeldDamageAccumulator {
       notes.push({
         code: 'input-invalid',
         severity: 'warning',
-        message: `${this.invalid} cycle record${this.invalid === 1 ? '' : 's'} with a non-finite or negative range or count ignored.`,
+        message: `${this.invalid} cycle record${this.invalid === 1 ? '' : 's'} with a non-finite, negative or absurd range (above 1e6 MPa) or count (above 1e20) ignored.`,
       });
     const contributors = [...this.bands[loading].values()]
       .sort((x, y) => y.damage - x.damage)
@@ -336,7 +345,16 @@ export function blocksToLimit(D: number | Computed, Dallow: number | Computed): 
         message: 'No cycle does damage: the spectrum can be repeated without end.',
       },
     ]);
-  return computed(a / d, formula, source, terms);
+  const blocks = a / d;
+  if (!(blocks < 1e300))
+    return infinite(formula, source, terms, [
+      {
+        code: 'no-damage',
+        severity: 'information',
+        message: 'The damage is too small to count: treated as none.',
+      },
+    ]);
+  return computed(blocks, formula, source, terms);
 }
 
 /** Life in cycles: the spectrum's cycles times its repeats to the permissible damage. */

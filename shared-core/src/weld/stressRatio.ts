@@ -8,6 +8,8 @@ import { type Computed, computed, type MethodNote } from '../computed';
 import { EN_COMPRESSIVE_SOURCE, IIW_RATIO_SOURCE } from './sources';
 import { inputError, isFiniteNumber, mpaTerm, numTerm } from './weldNotes';
 
+const isStress = (x: number) => isFiniteNumber(x) && Math.abs(x) <= 1e12;
+
 /**
  * Residual-stress condition of the IIW enhancement cases:
  * - `stress-relieved`: case I, unwelded or stress-relieved, residual stress negligible (< 0.2 fy);
@@ -19,9 +21,9 @@ export type ResidualCondition = 'stress-relieved' | 'small-scale' | 'as-welded';
 export function stressRatio(sigmaMax: number, sigmaMin: number): Computed {
   const formula = 'R = sigma_min / sigma_max';
   const terms = [mpaTerm('sigma_max', sigmaMax), mpaTerm('sigma_min', sigmaMin)];
-  if (!isFiniteNumber(sigmaMax) || !isFiniteNumber(sigmaMin))
+  if (!isStress(sigmaMax) || !isStress(sigmaMin))
     return computed(0, formula, IIW_RATIO_SOURCE, terms, [
-      inputError('sigma_max and sigma_min must be finite stresses.'),
+      inputError('sigma_max and sigma_min must be finite stresses (at most 1e6 MPa).'),
     ]);
   if (sigmaMax < sigmaMin)
     return computed(0, formula, IIW_RATIO_SOURCE, terms, [
@@ -40,7 +42,16 @@ export function stressRatio(sigmaMax: number, sigmaMin: number): Computed {
           'The whole cycle is compressive: R = sigma_min / sigma_max is outside the ranges of f(R); no R is reported.',
       },
     ]);
-  return computed(sigmaMin / sigmaMax, formula, IIW_RATIO_SOURCE, terms);
+  const r = sigmaMin / sigmaMax;
+  if (!(r > -1e6))
+    return computed(-1e6, formula, IIW_RATIO_SOURCE, terms, [
+      {
+        code: 'input',
+        severity: 'information',
+        message: 'sigma_max is negligible beside sigma_min: R is below -1e6 and reported as -1e6.',
+      },
+    ]);
+  return computed(r, formula, IIW_RATIO_SOURCE, terms);
 }
 
 /**
@@ -105,9 +116,9 @@ export function iiwStressRatioFactor(
 export function enEffectiveRange(sigmaMax: number, sigmaMin: number, stressRelieved: boolean): Computed {
   const terms = [mpaTerm('sigma_max', sigmaMax), mpaTerm('sigma_min', sigmaMin)];
   const notes: MethodNote[] = [];
-  if (!isFiniteNumber(sigmaMax) || !isFiniteNumber(sigmaMin))
+  if (!isStress(sigmaMax) || !isStress(sigmaMin))
     return computed(0, 'Delta sigma_E', EN_COMPRESSIVE_SOURCE, terms, [
-      inputError('sigma_max and sigma_min must be finite stresses.'),
+      inputError('sigma_max and sigma_min must be finite stresses (at most 1e6 MPa).'),
     ]);
   if (sigmaMax < sigmaMin)
     return computed(0, 'Delta sigma_E', EN_COMPRESSIVE_SOURCE, terms, [

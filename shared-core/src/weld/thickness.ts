@@ -30,7 +30,7 @@ function thinNote(t: number, standard: string): MethodNote {
 export function enSizeFactor(t: number, applies: boolean): Computed {
   const formula = 'ks = (25 mm / t)^0.2 for t > 25 mm, else 1';
   const errors = thicknessErrors(t);
-  const terms = [numTerm('t', isPositive(t) ? t / MM : 0, 'mm'), numTerm('t_ref', 25, 'mm')];
+  const terms = [numTerm('t', isPositive(t) && t <= 1 ? t / MM : 0, 'mm'), numTerm('t_ref', 25, 'mm')];
   if (errors.length > 0) return computed(1, formula, EN_SIZE_SOURCE, terms, errors);
   if (!applies)
     return computed(1, 'ks = 1 (the detail has no size effect in its table entry)', EN_SIZE_SOURCE, terms, [
@@ -86,7 +86,7 @@ export function iiwThicknessFactor(
   if (L !== undefined && !isPositive(L))
     errors.push(inputError('The attachment length L must be a positive length.'));
   const terms = [
-    numTerm('t', isPositive(t) ? t / MM : 0, 'mm'),
+    numTerm('t', isPositive(t) && t <= 1 ? t / MM : 0, 'mm'),
     numTerm('t_ref', 25, 'mm'),
     numTerm('n', n ?? 0),
   ];

@@ -23,7 +23,8 @@ export interface ThroatInput {
 
 function throatErrors(input: ThroatInput): string[] {
   const e: string[] = [];
-  if (!isPositive(input.a)) e.push('The throat thickness a must be a positive length.');
+  if (!isPositive(input.a) || input.a < 0.5e-3)
+    e.push('The throat thickness a must be a length of at least 0.5 mm.');
   else if (input.a > 0.2) e.push('A throat of more than 200 mm is not a fillet weld: check the unit of a.');
   if (!(Number.isInteger(input.welds) && input.welds >= 1))
     e.push('The number of throats must be a whole number, 1 or more.');

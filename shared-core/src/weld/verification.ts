@@ -3,7 +3,7 @@
  * the interaction of normal and shear ranges, the damage utilisation, the stress-range limit
  * relative to yield, and the safety factor on stress range under constant amplitude.
  */
-import { type Computed, computed, infinite, type MethodNote } from '../computed';
+import { type Computed, computed, infinite, type MethodNote, MPA } from '../computed';
 import { type WeldLoading, type WeldSnCurve, type WeldStandard, weldStrengthAtLife } from './snCurve';
 import {
   EN_RANGE_LIMIT_SOURCE,
@@ -36,7 +36,12 @@ export function rangeUtilisation(
     return computed(0, formula, EN_VERIFICATION_SOURCE, terms, [
       inputError('The equivalent range must be non-negative, the class and the partial factors positive.'),
     ]);
-  return computed((gammaFf * e) / (deltaC / gammaMf), formula, EN_VERIFICATION_SOURCE, terms);
+  const u = (gammaFf * e) / (deltaC / gammaMf);
+  if (!Number.isFinite(u))
+    return computed(0, formula, EN_VERIFICATION_SOURCE, terms, [
+      inputError('The utilisation overflows: check the inputs.'),
+    ]);
+  return computed(u, formula, EN_VERIFICATION_SOURCE, terms);
 }
 
 /** Damage utilisation D / D_allow; <= 1 passes. */
@@ -62,9 +67,9 @@ export function enInteraction(uSigma: number | Computed, uTau: number | Computed
   const formula =
     '(gamma_Ff Delta sigma_E,2 / (Delta sigma_C / gamma_Mf))^3 + (gamma_Ff Delta tau_E,2 / (Delta tau_C / gamma_Mf))^5';
   const terms = [numTerm('u_sigma', isFiniteNumber(s) ? s : 0), numTerm('u_tau', isFiniteNumber(t) ? t : 0)];
-  if (!(isFiniteNumber(s) && s >= 0 && isFiniteNumber(t) && t >= 0))
+  if (!(isFiniteNumber(s) && s >= 0 && isFiniteNumber(t) && t >= 0 && s <= 1e6 && t <= 1e6))
     return computed(0, formula, EN_VERIFICATION_SOURCE, terms, [
-      inputError('Both utilisations must be finite and non-negative.'),
+      inputError('Both utilisations must be finite, non-negative and at most 1e6.'),
     ]);
   const notes: MethodNote[] = [];
   if (s > 1 || t > 1)
@@ -93,9 +98,9 @@ export function iiwInteraction(
     numTerm('u_tau', isFiniteNumber(t) ? t : 0),
     numTerm('CV', CV),
   ];
-  if (!(isFiniteNumber(s) && s >= 0 && isFiniteNumber(t) && t >= 0))
+  if (!(isFiniteNumber(s) && s >= 0 && isFiniteNumber(t) && t >= 0 && s <= 1e6 && t <= 1e6))
     return computed(0, formula, IIW_INTERACTION_SOURCE, terms, [
-      inputError('Both utilisations must be finite and non-negative.'),
+      inputError('Both utilisations must be finite, non-negative and at most 1e6.'),
     ]);
   return computed((s ** 2 + t ** 2) / CV, formula, IIW_INTERACTION_SOURCE, terms, [
     {
@@ -128,9 +133,9 @@ export function stressRangeLimit(
     mpaTerm('Delta', isFiniteNumber(range) ? range : 0),
     mpaTerm('fy', isFiniteNumber(fy) ? fy : 0),
   ];
-  if (!(isFiniteNumber(range) && range >= 0) || !isPositive(fy))
+  if (!(isFiniteNumber(range) && range >= 0) || !isPositive(fy) || fy < 10 * MPA || fy > 3000 * MPA)
     return computed(0, formula, source, terms, [
-      inputError('The range must be non-negative and fy positive.'),
+      inputError('The range must be non-negative and fy a yield strength between 10 and 3000 MPa.'),
     ]);
   const limit = k * fy;
   terms.push(mpaTerm('limit', limit));

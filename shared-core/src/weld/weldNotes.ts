@@ -14,12 +14,15 @@ export function fromMemory(what: string): MethodNote {
   };
 }
 
+/** A term in MPa; a non-finite input shows as 0 (its error note says why). */
 export function mpaTerm(name: string, pa: number): Term {
-  return { name, value: pa / MPA, unit: 'MPa' };
+  const v = pa / MPA;
+  return { name, value: Number.isFinite(v) ? v : 0, unit: 'MPa' };
 }
 
+/** A plain term; a non-finite input shows as 0 (its error note says why). */
 export function numTerm(name: string, value: number, unit = ''): Term {
-  return { name, value, unit };
+  return { name, value: Number.isFinite(value) ? value : 0, unit };
 }
 
 export function isPositive(x: unknown): x is number {
