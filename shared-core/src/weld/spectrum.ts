@@ -405,8 +405,10 @@ export function rangeSafetyFactor(
       { ...opts, maxContributors: 0 },
     ).D;
   let lo = 1e-6;
-  let hi = 1e6;
-  if (damageAt(hi) <= Dallow)
+  const rangeMax = list.reduce((m, c) => (Number.isFinite(c.range) && c.range > m ? c.range : m), 0);
+  let hi = rangeMax > 0 ? Math.min(1e6, 1e12 / rangeMax) : 1e6;
+  const dHi = damageAt(hi);
+  if (dHi === 0)
     return infinite(formula, source, terms, [
       {
         code: 'no-damage',
@@ -415,6 +417,20 @@ export function rangeSafetyFactor(
           'No factor on the ranges brings the damage to D_allow (no range does damage): the safety factor is unbounded.',
       },
     ]);
+  if (dHi <= Dallow)
+    return computed(
+      hi,
+      formula,
+      source,
+      [...terms, numTerm('s', hi)],
+      [
+        {
+          code: 'range-factor-bound',
+          severity: 'information',
+          message: `The damage stays below D_allow up to ranges of 1e6 MPa: the safety factor is at least ${hi.toPrecision(3)}.`,
+        },
+      ],
+    );
   if (damageAt(lo) > Dallow)
     return computed(lo, formula, source, terms, [inputError('The spectrum exceeds D_allow at any factor.')]);
   for (let i = 0; i < 200 && hi / lo > 1 + 1e-12; i++) {
