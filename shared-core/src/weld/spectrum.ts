@@ -79,6 +79,7 @@ export class WeldDamageAccumulator {
   private firstRange = Number.NaN;
   private distinct = false;
   private belowCutOff = 0;
+  private zeroRange = 0;
 
   constructor(curve: WeldSnCurve, opts: WeldDamageOptions = {}) {
     this.gammaFf = opts.gammaFf ?? 1;
@@ -121,6 +122,7 @@ export class WeldDamageAccumulator {
     if (range > this.rangeMax) this.rangeMax = range;
     if (Number.isNaN(this.firstRange)) this.firstRange = range;
     else if (range !== this.firstRange) this.distinct = true;
+    if (range === 0) this.zeroRange += count;
     if (this.errors.length > 0 || range === 0) return;
     const s = range * this.gammaFf;
     if (this.design.deltaL !== null && s < this.design.deltaL) this.belowCutOff += count;
@@ -181,7 +183,7 @@ export class WeldDamageAccumulator {
           severity: 'information',
           message: `${cyclesText(this.belowCutOff)} cycles are below the cut-off ${mpaText(c.deltaL ?? 0)} (design curve) and do no damage.`,
         });
-      const belowKnee = this.cycles - this.damaging[loading] - this.belowCutOff;
+      const belowKnee = this.cycles - this.damaging[loading] - this.belowCutOff - this.zeroRange;
       if (belowKnee > 0 && m2 === null)
         notes.push({
           code: 'below-knee',
