@@ -184,7 +184,7 @@ export class WeldDamageAccumulator {
           message: `${cyclesText(this.belowCutOff)} cycles are below the cut-off ${mpaText(c.deltaL ?? 0)} (design curve) and do no damage.`,
         });
       const belowKnee = this.cycles - this.damaging[loading] - this.belowCutOff - this.zeroRange;
-      if (belowKnee > 0 && m2 === null)
+      if (belowKnee > 1e-9 * this.cycles && m2 === null)
         notes.push({
           code: 'below-knee',
           severity: 'information',
