@@ -339,7 +339,9 @@ describe('critical points: the signs of the loads of a non-rotating section', ()
           const na = s * ba + xa / 0.85;
           const nm = s * bm + xm;
           const sa = Math.sqrt(na * na + 3 * ta * ta);
-          const sm = Math.sign(nm) * Math.sqrt(nm * nm + 3 * tm * tm);
+          // Eq. 6-67; a compressive normal mean signs it only without a shear mean, with one it
+          // earns no credit and the shear share stays (Sec. 6-12; common practice, no source).
+          const sm = nm >= 0 ? Math.sqrt(nm * nm + 3 * tm * tm) : tm === 0 ? nm : Math.sqrt(3) * Math.abs(tm);
           if (sa === 0 && sm <= 0) return Number.POSITIVE_INFINITY;
           if (sm <= 0) return Se / sa;
           return 1 / (sa / Se + sm / 700e6);

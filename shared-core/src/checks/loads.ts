@@ -405,6 +405,16 @@ export function nominalStresses(ctx: CheckContext): NominalStresses | null {
   let bending = sB ?? ZERO;
   let torsion = sT ?? ZERO;
   let axial = sX ?? ZERO;
+  if (sB && ctx.option('rotation') === 'rotating' && sB.m !== 0) {
+    // A bending mean cannot stay at a fibre of a shaft that turns under it (rotatingBending).
+    bending = { a: Math.abs(sB.a) + Math.abs(sB.m), m: 0 };
+    ctx.diag(
+      'information',
+      'rotating-stated-mean',
+      '`rotation: rotating`: every fibre passes both sides of the bending stress each revolution, so the stated bending mean is reversed with the amplitude (|sigma_a| + |sigma_m|, mean 0; Shigley Sec. 6-14, Ex. 7-1). For the stresses at one point of a section that does not turn, state `rotation: non-rotating`',
+      ctx.rangeOf('sigma_m'),
+    );
+  }
   if (M || T || F) {
     const d = need(ctx, 'd', 'a load on a round section');
     if (d === undefined) return null;

@@ -64,7 +64,9 @@ export function runStressLife(ctx: CheckContext): MethodExtras {
   const chain = enduranceChain(ctx, st, load, s.geometry, ax);
 
   // The section's critical points and their equivalent stresses (criticalPoints.ts).
-  const rotating = s.geometry === 'round' && isRotating(ctx);
+  // Stated nominal stresses are the engineer's point: they rotate only when the note says so.
+  const rotating =
+    s.geometry === 'round' && (s.bendingFromMoment ? isRotating(ctx) : ctx.option('rotation') === 'rotating');
   const momentRange = ctx.rangeOf(ctx.has('M_max') ? 'M_max' : 'M_a');
   if (s.geometry === 'round' && s.bendingFromMoment && rotating)
     warnRotationAssumed(ctx, ctx.values.M_m?.si ?? 0, momentRange);

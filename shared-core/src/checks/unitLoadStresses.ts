@@ -207,7 +207,9 @@ export function damageSection(
       : loadKind === 'torsion'
         ? 'shear'
         : 'combined';
-  const rotating = geometry === 'round' && isRotating(ctx);
+  // Stated nominal stresses are the engineer's point: they rotate only when the note says so.
+  const rotating =
+    geometry === 'round' && (used.has('M') ? isRotating(ctx) : ctx.option('rotation') === 'rotating');
   const fibres = route === 'combined' && geometry === 'round' && !rotating && used.has('M');
   return {
     geometry,
@@ -268,12 +270,15 @@ export function notchEquivalent(sec: DamageSection, loads: LevelLoads): Array<{ 
   const tau = scaled(sec, 'tau', loads.tau);
   return sec.points.map((pt) => {
     // A rotating shaft reverses its largest moment at every fibre (loads.ts, rotatingBending).
-    const bend = sec.rotating ? { a: Math.abs(M.a) + Math.abs(M.m), m: 0 } : { a: pt.s * M.a, m: pt.s * M.m };
+    // A stated bending stress on a section said to rotate is reversed the same way.
+    const bend = sec.rotating
+      ? { a: Math.abs(M.a) + Math.abs(M.m) + Math.abs(sB.a) + Math.abs(sB.m), m: 0 }
+      : { a: pt.s * M.a + sB.a, m: pt.s * M.m + sB.m };
     const input = {
       ...c,
       // The moment's bending stress takes the point's sign; a stated stress is the point's own.
-      sigma_a: bend.a + sB.a,
-      sigma_m: bend.m + sB.m,
+      sigma_a: bend.a,
+      sigma_m: bend.m,
       sigma_ax_a: F.a + sX.a,
       sigma_ax_m: F.m + sX.m,
       tau_a: T.a + tau.a,

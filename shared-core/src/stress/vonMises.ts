@@ -43,7 +43,7 @@ export const AXIAL_LOAD_FACTOR = 0.85;
 const SOURCE_A =
   "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-14, Eq. (6-66) (combinations of loading modes, axial amplitude divided by kc = 0.85)";
 const SOURCE_M =
-  "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-14, Eq. (6-67); signed with the normal mean part (common practice, no source)";
+  "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-14, Eq. (6-67); a compressive normal mean signs it only without a shear mean (Sec. 6-12), with one it earns no credit (common practice, no source)";
 const SOURCE_MAX =
   "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-14 (von Mises stress of the peak stresses for first-cycle yield, sigma'_max = [(sigma_m + sigma_a)^2 + 3 (tau_m + tau_a)^2]^(1/2), axial without 0.85)";
 
@@ -65,7 +65,8 @@ const FACTOR_KEYS: Array<keyof EquivalentStressInput> = ['Kf', 'Kf_ax', 'Kfs', '
 
 export function equivalentStresses(p: EquivalentStressInput): EquivalentStresses {
   const fA = 'sigma_a_eq = sqrt((Kf*sigma_a + Kf_ax*sigma_ax_a/0.85)^2 + 3*(Kfs*tau_a)^2)';
-  const fM = 'sigma_m_eq = sign(m) * sqrt(m^2 + 3*(Kfsm*tau_m)^2), m = Kfm*sigma_m + Kf_axm*sigma_ax_m';
+  const fM =
+    'sigma_m_eq = sqrt(m^2 + 3*(Kfsm*tau_m)^2), m = Kfm*sigma_m + Kf_axm*sigma_ax_m; m < 0: -|m| without a shear mean, sqrt(3)*Kfsm*|tau_m| with one';
   const fMax =
     'sigma_max_eq = sqrt((|m| + Kf*|sigma_a| + Kf_ax*|sigma_ax_a|)^2 + 3*(|Kfsm*tau_m| + Kfs*|tau_a|)^2)';
 
@@ -107,8 +108,7 @@ export function equivalentStresses(p: EquivalentStressInput): EquivalentStresses
 
   const normalMean = Kfm * p.sigma_m + Kf_axm * p.sigma_ax_m;
   const shearMean = Kfsm * p.tau_m;
-  const magMean = Math.sqrt(normalMean * normalMean + 3 * shearMean * shearMean);
-  const sigmaMEq = normalMean < 0 ? -magMean : magMean;
+  const sigmaMEq = equivalentMean(normalMean, shearMean);
 
   const normalPeak = Math.abs(normalMean) + Kf * sa + Kf_ax * saxa;
   const shearPeak = Math.abs(shearMean) + shearAmp;
@@ -134,7 +134,9 @@ export function equivalentStresses(p: EquivalentStressInput): EquivalentStresses
     meanNotes.push({
       code: 'compressive-mean',
       message:
-        'The normal mean stress is compressive: sigma_m_eq carries its sign, so the criteria take the compressive-mean branch.',
+        shearMean === 0
+          ? 'The normal mean stress is compressive and there is no shear mean: sigma_m_eq carries its sign, so the criteria take the compressive-mean branch.'
+          : 'The normal mean stress is compressive but a shear mean acts: the compressive normal mean earns no credit and the shear mean still counts, sigma_m_eq = sqrt(3) Kfs |tau_m| (Shigley Sec. 6-12 for the compressive normal mean, Eq. 6-67 for the shear part).',
       severity: 'information',
     });
   }
@@ -184,7 +186,7 @@ export function equivalentStresses(p: EquivalentStressInput): EquivalentStresses
 const SOURCE_A_POINT =
   "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-14, Eq. (6-66), evaluated at one point of the section with the signed components that act there (axial amplitude divided by kc = 0.85)";
 const SOURCE_M_POINT =
-  "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-14, Eq. (6-67), at one point of the section; signed with the point's normal mean stress (common practice, no source)";
+  "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-14, Eq. (6-67), at one point of the section; a compressive normal mean signs it only without a shear mean (Sec. 6-12), with one it earns no credit (common practice, no source)";
 const SOURCE_MAX_POINT =
   "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-14 (von Mises stress of the peak stresses for first-cycle yield, axial without 0.85), taken at both instants of the in-phase cycle (mean + amplitude and mean - amplitude) at one point, the larger: a compressive peak counts like a tensile one";
 
@@ -209,7 +211,7 @@ export function pointEquivalentStresses(p: EquivalentStressInput): EquivalentStr
   const fA =
     'sigma_a_eq = sqrt((Kf*sigma_a + Kf_ax*sigma_ax_a/0.85)^2 + 3*(Kfs*tau_a)^2)  (signed components at the point)';
   const fM =
-    'sigma_m_eq = sign(m) * sqrt(m^2 + 3*(Kfsm*tau_m)^2), m = Kfm*sigma_m + Kf_axm*sigma_ax_m  (at the point)';
+    'sigma_m_eq = sqrt(m^2 + 3*(Kfsm*tau_m)^2), m = Kfm*sigma_m + Kf_axm*sigma_ax_m; m < 0: -|m| without a shear mean, sqrt(3)*Kfsm*|tau_m| with one  (at the point)';
   const fMax =
     'sigma_max_eq = max over the instants +/- of sqrt((m +/- (Kf*sigma_a + Kf_ax*sigma_ax_a))^2 + 3*(Kfsm*tau_m +/- Kfs*tau_a)^2)';
 
@@ -246,8 +248,7 @@ export function pointEquivalentStresses(p: EquivalentStressInput): EquivalentStr
 
   const normalMean = Kfm * p.sigma_m + Kf_axm * p.sigma_ax_m;
   const shearMean = Kfsm * p.tau_m;
-  const magMean = Math.sqrt(normalMean * normalMean + 3 * shearMean * shearMean);
-  const sigmaMEq = normalMean < 0 ? -magMean : magMean;
+  const sigmaMEq = equivalentMean(normalMean, shearMean);
 
   const peakAmp = Kf * p.sigma_a + Kf_ax * p.sigma_ax_a;
   const s1 = normalMean + peakAmp;
@@ -276,7 +277,9 @@ export function pointEquivalentStresses(p: EquivalentStressInput): EquivalentStr
     meanNotes.push({
       code: 'compressive-mean',
       message:
-        'The normal mean stress at this point is compressive: sigma_m_eq carries its sign, so the criteria take the compressive-mean branch here.',
+        shearMean === 0
+          ? 'The normal mean stress is compressive and there is no shear mean: sigma_m_eq carries its sign, so the criteria take the compressive-mean branch.'
+          : 'The normal mean stress is compressive but a shear mean acts: the compressive normal mean earns no credit and the shear mean still counts, sigma_m_eq = sqrt(3) Kfs |tau_m| (Shigley Sec. 6-12 for the compressive normal mean, Eq. 6-67 for the shear part).',
       severity: 'information',
     });
   }
@@ -335,4 +338,19 @@ export function pointEquivalentStresses(p: EquivalentStressInput): EquivalentStr
       maxNotes,
     ),
   };
+}
+
+/**
+ * The von Mises mean with the sign the mean-stress criteria need. A tensile (or zero) normal
+ * mean: Shigley Eq. 6-67, sqrt(m^2 + 3 tau_m^2). A compressive normal mean and no shear mean:
+ * -|m|, so that the criteria take their compressive branch (Shigley Sec. 6-12, n = Se/sigma_a).
+ * A compressive normal mean with a shear mean: the compression earns no credit and the shear
+ * mean keeps its Eq. 6-67 share, sqrt(3)|tau_m| (positive). This is continuous across m = 0
+ * and never lets a small compressive normal mean erase a torsional mean (common practice, no
+ * source; conservative against signing the whole von Mises mean with m).
+ */
+export function equivalentMean(normalMean: number, shearMean: number): number {
+  if (normalMean >= 0) return Math.sqrt(normalMean * normalMean + 3 * shearMean * shearMean);
+  if (shearMean === 0) return normalMean;
+  return Math.sqrt(3) * Math.abs(shearMean);
 }

@@ -54,10 +54,13 @@ describe('equivalentStresses (Shigley MED, combined loading)', () => {
     expect(r.sigma_max_eq.value).toBeCloseTo(Math.sqrt((12.9 + 20 + 6) ** 2 + 3 * (8.4 + 2.8) ** 2), 12);
   });
 
-  it('a compressive normal mean keeps its sign; negative amplitudes count as magnitudes', () => {
+  it('a compressive normal mean keeps its sign without a shear mean; with one it earns no credit (Shigley Sec. 6-12 and Eq. 6-67); negative amplitudes count as magnitudes', () => {
+    expect(eq({ sigma_m: -100 * MPA }).sigma_m_eq.value / MPA).toBeCloseTo(-100, 9);
     const r = eq({ sigma_m: -100 * MPA, tau_m: 10 * MPA, sigma_a: -50 * MPA });
-    expect(r.sigma_m_eq.value).toBeLessThan(0);
-    expect(r.sigma_m_eq.value / MPA).toBeCloseTo(-Math.sqrt(100 ** 2 + 3 * 10 ** 2), 9);
+    expect(r.sigma_m_eq.value / MPA).toBeCloseTo(Math.sqrt(3) * 10, 9);
+    // Continuous across a zero normal mean: the shear share of Eq. 6-67 either side.
+    expect(eq({ sigma_m: -1, tau_m: 10 * MPA }).sigma_m_eq.value / MPA).toBeCloseTo(Math.sqrt(3) * 10, 6);
+    expect(eq({ sigma_m: 1, tau_m: 10 * MPA }).sigma_m_eq.value / MPA).toBeCloseTo(Math.sqrt(3) * 10, 6);
     expect(r.sigma_a_eq.value / MPA).toBeCloseTo(50, 9);
     expect(r.sigma_max_eq.value / MPA).toBeCloseTo(Math.sqrt(150 ** 2 + 3 * 10 ** 2), 9);
   });
@@ -97,7 +100,8 @@ describe('pointEquivalentStresses (the signed stresses at one point of the secti
     const vm1 = Math.sqrt(100 ** 2 + 3 * 10 ** 2);
     const vm2 = Math.sqrt(200 ** 2 + 3 * 30 ** 2);
     expect(r.sigma_max_eq.value / MPA).toBeCloseTo(Math.max(vm1, vm2), 9);
-    expect(r.sigma_m_eq.value / MPA).toBeCloseTo(-Math.sqrt(150 ** 2 + 3 * 20 ** 2), 9);
+    // Compressive normal mean with a shear mean: only the shear share counts (equivalentMean).
+    expect(r.sigma_m_eq.value / MPA).toBeCloseTo(Math.sqrt(3) * 20, 9);
     expect(r.sigma_max_eq.notes?.find((n) => n.code === 'peak-instant')?.message).toMatch(/mean - amplitude/);
   });
 
