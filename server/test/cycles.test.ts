@@ -137,3 +137,27 @@ describe('fatigue-notes cycles', () => {
     expect(j.cycles.reduce((s: number, c: { count: number }) => s + c.count, 0)).toBe(j.summary.totalCycles);
   });
 });
+
+describe('fatigue-notes cycles on samples that are not finite numbers (issue 16, item 1)', () => {
+  it('exit 1 for 1e309, inf and nan rows, each named on stderr with its line; no null or Infinity printed', async () => {
+    const f = file('nonfinite.csv', 'load\n1\n-1\n1e309\n2\ninf\n-2\nnan\n1\n');
+    const j = await run([f, '--format', 'json']);
+    expect(j.code).toBe(1);
+    for (const line of [4, 6, 8]) expect(j.stderr).toContain(`nonfinite.csv:${line}: error:`);
+    expect(j.stderr).toContain('[history-non-finite]');
+    expect(j.stdout).not.toMatch(/null|Infinity|NaN/);
+    const parsed = JSON.parse(j.stdout);
+    expect(parsed.summary.skippedRows).toBe(3);
+    expect(parsed.summary.samples).toBe(5);
+    const t = await run([f]);
+    expect(t.code).toBe(1);
+    expect(t.stdout).toContain('3 rows without a finite number skipped');
+    expect(t.stdout).not.toMatch(/Infinity|NaN/);
+  });
+
+  it('blank lines and a header row still exit 0', async () => {
+    const r = await run([file('blank.csv', 'load [kN]\n\n1\n-1\n\n2\n-2\n\n')]);
+    expect(r.code).toBe(0);
+    expect(r.stderr).toBe('');
+  });
+});

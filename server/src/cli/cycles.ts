@@ -14,10 +14,11 @@
  *   range-mean bins instead of the cycles.
  *
  * Exit codes: 0 counted, no error; 1 data errors: a missing column (the available columns
- * are listed), fewer than three points, or rows whose value is not a number (each reported
- * on stderr with its line; those rows are skipped and the rest is still counted and
- * printed, so that one bad row does not hide the result but does fail a CI job);
- * 2 usage error or unreadable file.
+ * are listed), fewer than three points, or rows whose value is not a finite number (a word,
+ * `nan`, `inf`, `1e309`: each reported on stderr with its line; those rows are skipped and
+ * the rest is still counted and printed, so that one bad row does not hide the rest, but
+ * the count is incomplete, a lost sample may be the largest load, and the exit code fails
+ * a CI job); 2 usage error or unreadable file.
  */
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
@@ -336,6 +337,8 @@ function writeTextTail(
       `largest range ${fmt(r.maxRange)}; min ${fmt(r.min)}, max ${fmt(r.max)}.\n`,
   );
   if (reader.badRowCount > 0)
-    out.put(`${plural(reader.badRowCount, 'row')} without a number skipped (see stderr).\n`);
+    out.put(
+      `${plural(reader.badRowCount, 'row')} without a finite number skipped (see stderr): the count is incomplete.\n`,
+    );
   if (reader.blankLineCount > 0) out.put(`${plural(reader.blankLineCount, 'blank line')} skipped.\n`);
 }

@@ -403,6 +403,17 @@ function historyPass(
   scan.end();
   reportIssues(ctx, scan.issues, h.range, h.path);
   if (scan.fatal || scan.valueCount < 3) return null;
+  if (scan.badRowCount > 0) {
+    // A skipped row may hold the largest load: no damage from what is left.
+    const n = scan.badRowCount;
+    ctx.diag(
+      'information',
+      'results-withheld',
+      `no damage until the ${n} row${n === 1 ? '' : 's'} of \`${h.path}\` without a finite number ${n === 1 ? 'is' : 'are'} fixed: a lost sample may be the largest load of the history`,
+      h.range,
+    );
+    return null;
+  }
 
   // Notch stresses per 1.0 of the file (linear in the load).
   const absScale = Math.abs(h.scale);

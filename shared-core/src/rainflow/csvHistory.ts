@@ -25,8 +25,11 @@
  *   (information `csv-column`).
  * - A column that does not exist is an error listing the available columns; the reader
  *   then stops (`fatal`). A data row whose value is not a number (or is missing) is an
- *   error with its line number and is skipped; the first 100 are listed one by one, the
- *   rest summed up in one issue at `end()`.
+ *   error `csv-non-numeric` with its line number; one whose value is a number that is not
+ *   finite (`1e309` overflows; `nan`, `inf`, `Infinity`) is an error `history-non-finite`.
+ *   Such rows are skipped and counted in `badRowCount`; the first 100 are listed one by one,
+ *   the rest summed up in one issue at `end()`. A history with such a row must not be used
+ *   for a result: the lost sample may be its largest load.
  * - Fewer than three numbers in all is an error at `end()` (`history-too-few-points`).
  */
 export interface HistoryIssue {
@@ -57,6 +60,8 @@ export interface HistoryCsvOptions {
 const NUMBER_RE = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 const TIME_EXACT_RE = /^(?:t|s|ms|sec|secs|seconds)$/;
 const TIME_PREFIX_RE = /^(?:time|zeit|temps|tiempo|timestamp|date|datetime|elapsed)(?:$|[\s_\-./:])/;
+/** Words loggers write for a lost or saturated sample. */
+const NON_FINITE_WORD_RE = /^"?[+-]?(?:nan|inf|infinity|1\.#inf|1\.#ind|1\.#qnan)"?$/i;
 const UNIT_SUFFIX_RE = /\s*[[(][^\])]*[\])]\s*$/;
 const TIME_SNIFF_ROWS = 16;
 
@@ -154,8 +159,10 @@ export class HistoryCsvReader {
   valueCount = 0;
   /** Lines seen. */
   lineCount = 0;
-  /** Rows skipped because their value was not a number. */
+  /** Rows skipped because their value was not a finite number (words, `nan`, `inf`, `1e309`). */
   badRowCount = 0;
+  /** Of those, the rows whose value is a non-finite number (`nan`, `inf`, an overflow like `1e309`). */
+  nonFiniteRowCount = 0;
   blankLineCount = 0;
 
   private readonly opts: HistoryCsvOptions;
@@ -223,7 +230,7 @@ export class HistoryCsvReader {
         0,
         'csv-non-numeric',
         'error',
-        `${more} more row${more === 1 ? '' : 's'} without a number in ${this.columnLabel()} skipped (${this.badRowCount} in all).`,
+        `${more} more row${more === 1 ? '' : 's'} without a finite number in ${this.columnLabel()} skipped (${this.badRowCount} in all).`,
       );
     }
     if (!this.fatal && this.valueCount < 3) {
@@ -386,26 +393,45 @@ export class HistoryCsvReader {
   private dataRow(raw: string, no: number): void {
     const field = fieldAt(raw, this.columnIndex, this.delimiter);
     const x = parseHistoryNumber(field, this.decimalComma);
-    if (Number.isNaN(x)) {
+    if (!Number.isFinite(x)) {
       // Blank lines and comments are rare: look for them only when the row has no number.
-      if (isBlank(raw)) {
-        this.blank(no);
-        return;
+      if (Number.isNaN(x)) {
+        if (isBlank(raw)) {
+          this.blank(no);
+          return;
+        }
+        if (isComment(raw)) return;
       }
-      if (isComment(raw)) return;
-      this.badRowCount++;
-      if (this.badRowCount <= this.maxRowReports) {
-        const shown = field.trim();
-        const msg =
-          shown === ''
-            ? `No value in ${this.columnLabel()}; row skipped.`
-            : `"${shown.length > 40 ? `${shown.slice(0, 40)}...` : shown}" in ${this.columnLabel()} is not a number; row skipped.`;
-        this.report(no, 'csv-non-numeric', 'error', msg);
-      }
+      this.badRow(no, field.trim(), x);
       return;
     }
     this.valueCount++;
     if (this.opts.onValue !== undefined) this.opts.onValue(x, no);
+  }
+
+  /**
+   * A row whose value cannot be read as a finite load: an error with its line. It is left
+   * out of the count, and a user of the numbers must not act on a history with such rows
+   * (`badRowCount > 0`): a lost sample may be the largest load of the history.
+   */
+  private badRow(no: number, shown: string, x: number): void {
+    this.badRowCount++;
+    const nonFinite = !Number.isNaN(x) || NON_FINITE_WORD_RE.test(shown);
+    if (nonFinite) this.nonFiniteRowCount++;
+    if (this.badRowCount > this.maxRowReports) return;
+    const quoted = `"${shown.length > 40 ? `${shown.slice(0, 40)}...` : shown}" in ${this.columnLabel()}`;
+    if (!nonFinite) {
+      const msg =
+        shown === ''
+          ? `No value in ${this.columnLabel()}; row skipped.`
+          : `${quoted} is not a number; row skipped.`;
+      this.report(no, 'csv-non-numeric', 'error', msg);
+      return;
+    }
+    const why = Number.isNaN(x)
+      ? 'is not a finite number (a logger writes it for a lost or saturated sample)'
+      : 'is beyond the largest number there is (about 1.8e308)';
+    this.report(no, 'history-non-finite', 'error', `${quoted} ${why}; row skipped.`);
   }
 
   private blank(no: number): void {

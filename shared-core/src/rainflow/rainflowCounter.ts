@@ -48,7 +48,7 @@ export interface RainflowResult {
   halfCycles: number;
   /** Finite samples read. */
   sampleCount: number;
-  /** Non-finite samples ignored. */
+  /** Non-finite samples that could not be counted (an error note says so: the count is incomplete). */
   skippedSamples: number;
   turningPointCount: number;
   /** The residue (points left after the three-point rules), counted as half cycles in step (6). */
@@ -176,10 +176,11 @@ export class RainflowCounter {
       });
     }
     if (this.skipped > 0) {
+      // A lost sample may be the largest load of the history: counting without it is not safe.
       notes.push({
         code: 'history-non-finite',
-        severity: 'warning',
-        message: `${this.skipped} non-finite sample${this.skipped === 1 ? ' was' : 's were'} ignored.`,
+        severity: 'error',
+        message: `${this.skipped} sample${this.skipped === 1 ? ' is' : 's are'} not finite (NaN or Infinity) and could not be counted: the count misses them, and they may be the largest loads of the history.`,
       });
     }
     this.result = {
