@@ -161,3 +161,34 @@ describe('fatigue-notes cycles on samples that are not finite numbers (issue 16,
     expect(r.stderr).toBe('');
   });
 });
+
+describe('fatigue-notes cycles on values whose ranges overflow (issue 16, item 2)', () => {
+  it('exit 1 with history-overflow at the line that overflows; never null, Infinity or NaN in JSON or text', async () => {
+    const f = file('huge-range.csv', 'M\n0\n1.5e308\n-1.5e308\n1e308\n0\n');
+    for (const args of [
+      [f, '--format', 'json'],
+      [f],
+      [f, '--bins', '4'],
+      [f, '--bins', '4', '--format', 'json'],
+    ]) {
+      const r = await run(args);
+      expect(r.code, args.join(' ')).toBe(1);
+      expect(r.stderr).toContain('huge-range.csv:4: error:');
+      expect(r.stderr).toContain('[history-overflow]');
+      expect(r.stdout).not.toMatch(/null|Infinity|NaN/);
+      if (args.includes('json')) JSON.parse(r.stdout);
+    }
+  });
+
+  it('values of one sign near 1e308 count without overflow (exit 0, finite means)', async () => {
+    const r = await run([
+      file('one-sign.csv', 'M\n1.5e308\n1.7e308\n1.6e308\n1.7e308\n1.5e308\n'),
+      '--format',
+      'json',
+    ]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).not.toMatch(/null|Infinity|NaN/);
+    const j = JSON.parse(r.stdout);
+    expect(j.summary.totalCycles).toBe(2);
+  });
+});

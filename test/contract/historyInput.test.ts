@@ -137,3 +137,63 @@ describe('samples that cannot be read as finite loads are errors and withhold th
     expect(c.values.D?.si).toBeGreaterThan(0);
   });
 });
+
+describe('values whose ranges or stresses overflow (issue 16, item 2)', () => {
+  it('values near 1e308 of both signs: history-overflow on the history line, no internal error, no D', () => {
+    const { c, text } = evaluate(
+      HISTORY,
+      fakeReader({ 'loads/h.csv': csvOf([0, 1.5e308, -1.5e308, 1e308, 0]) }),
+    );
+    const d = diag(c, 'history-overflow');
+    expect(d.severity).toBe('error');
+    expect(d.range.start.line).toBe(lineOf(text, 'history: loads/h.csv'));
+    expect(c.values.D).toBeUndefined();
+    expect(c.status).toBe('error');
+    expectNothingNonFinite(c);
+  });
+
+  it('a history_scale that makes the stresses overflow: history-overflow on the history_scale line', () => {
+    // 1e300 MPa per 1.0, samples up to 5000: stresses of 1e309 Pa and more.
+    const lines = HISTORY.map((l) => (l.startsWith('history_scale') ? 'history_scale = 1e300 MPa' : l));
+    const { c, text } = evaluate(lines, fakeReader({ 'loads/h.csv': csvOf(ASTM_FIG6.map((x) => x * 1000)) }));
+    const d = diag(c, 'history-overflow');
+    expect(d.range.start.line).toBe(lineOf(text, 'history_scale'));
+    expect(c.values.D).toBeUndefined();
+    expectNothingNonFinite(c);
+  });
+
+  it('a history_scale so small that the stresses round to zero: absurd-value on its line, not a pass with D = 0', () => {
+    const lines = HISTORY.map((l) => (l.startsWith('history_scale') ? 'history_scale = 1e-320 Pa' : l));
+    const { c, text } = evaluate(
+      [...lines, 'require: repeats >= 1'],
+      fakeReader({ 'loads/h.csv': csvOf(ASTM_FIG6) }),
+    );
+    const d = diag(c, 'absurd-value');
+    expect(d.range.start.line).toBe(lineOf(text, 'history_scale'));
+    expect(c.values.D).toBeUndefined();
+    expect(c.status).toBe('error');
+    expectNothingNonFinite(c);
+  });
+
+  it('finite stresses whose Miner sum overflows: damage-overflow, no D, no repeats of 0', () => {
+    // Zero-mean cycles of 1e150 Pa: no static limit of the mean is reached, but the lives
+    // (sigma/a)^(1/b) underflow to zero and n/N overflows.
+    const lines = HISTORY.map((l) => (l.startsWith('history_scale') ? 'history_scale = 1e150 Pa' : l));
+    const { c, text } = evaluate(lines, fakeReader({ 'loads/h.csv': csvOf([1, -1, 1, -1, 1]) }));
+    const d = diag(c, 'damage-overflow');
+    expect(d.range.start.line).toBe(lineOf(text, 'history: loads/h.csv'));
+    expect(c.values.D).toBeUndefined();
+    expect(c.values.repeats).toBeUndefined();
+    expectNothingNonFinite(c);
+  });
+
+  it('a tiny history_scale with a gate: the gate in file units overflows to an infinite gate, which drops every reversal', () => {
+    const lines = HISTORY.map((l) => (l.startsWith('history_scale') ? 'history_scale = 1e-300 Pa' : l));
+    const { c } = evaluate(
+      [...lines, 'history_gate = 1e10 Pa'],
+      fakeReader({ 'loads/h.csv': csvOf(ASTM_FIG6) }),
+    );
+    expect(c.values.cycles_counted?.si).toBe(0);
+    expectNothingNonFinite(c);
+  });
+});

@@ -14,7 +14,8 @@
  *   range-mean bins instead of the cycles.
  *
  * Exit codes: 0 counted, no error; 1 data errors: a missing column (the available columns
- * are listed), fewer than three points, or rows whose value is not a finite number (a word,
+ * are listed), fewer than three points, values so far apart that their range overflows
+ * (about 1.8e308: counting stops at that line), or rows whose value is not a finite number (a word,
  * `nan`, `inf`, `1e309`: each reported on stderr with its line; those rows are skipped and
  * the rest is still counted and printed, so that one bad row does not hide the rest, but
  * the count is incomplete, a lost sample may be the largest load, and the exit code fails
@@ -206,7 +207,9 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
         },
       });
       await feedFile(path, scan);
-      if (!scan.fatal && lo <= hi) histogram = new RangeMeanHistogram(histogramLimitsFor(lo, hi, bins));
+      // (A spread that overflows gets no histogram: the count below stops with an error.)
+      if (!scan.fatal && lo <= hi && hi - lo <= Number.MAX_VALUE)
+        histogram = new RangeMeanHistogram(histogramLimitsFor(lo, hi, bins));
     }
 
     const out = new Output(io.stdout);
@@ -237,7 +240,14 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
       rows++;
     };
     const counter = new RainflowCounter({ gate, onCycle });
-    reader = new HistoryCsvReader({ column, onValue: (x) => counter.push(x) });
+    // The line of the first sample the counter refused (it stops on a spread that overflows).
+    let stopLine = 0;
+    reader = new HistoryCsvReader({
+      column,
+      onValue: (x, line) => {
+        if (!counter.push(x) && stopLine === 0) stopLine = line;
+      },
+    });
     await feedFile(path, reader, { out, drain: io.drain });
 
     const issues = [...reader.issues];
@@ -249,7 +259,7 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
     for (const n of result.notes) {
       if (!issues.some((i) => i.code === n.code)) {
         issues.push({
-          line: 0,
+          line: n.code === 'history-overflow' ? stopLine : 0,
           code: n.code,
           message: n.message,
           severity: n.severity === 'error' ? 'error' : 'warning',

@@ -34,6 +34,7 @@ import {
   RAINFLOW_SOURCE,
   RainflowCounter,
   RangeMeanHistogram,
+  scaledSpreadProblem,
 } from '../rainflow';
 import type { SnLine } from '../sn';
 import { type DimKey, sameVector, vectorOf } from '../units/dimensions';
@@ -208,6 +209,11 @@ export function runDamage(ctx: CheckContext): MethodExtras {
   if (!pass) return { criterion };
 
   const res = pass.acc.result(10);
+  if (!Number.isFinite(res.D)) {
+    const why = 'the Miner sum overflows (lives too short to divide by: stresses far beyond the strength)';
+    ctx.diag('error', 'damage-overflow', `${why}: check the loads and \`history_scale\``, loadRange);
+    return { criterion };
+  }
   recordDamage(ctx, res, pass, ev, [...baseInputs, ...pass.inputs], loadRange);
   const sn: SnData = {
     a: ev.line.a,
@@ -421,6 +427,12 @@ function historyPass(
   const unitLoad = (a: number, m: number) => ({ [h.base]: { a, m } });
   const cA = notchEquivalent(sec, unitLoad(1, 0)).sa * absScale;
   const cM = notchEquivalent(sec, unitLoad(0, 1)).sm * h.scale;
+  const bad = scaledSpreadProblem(lo, hi, cA, cM, h.path);
+  if (bad) {
+    const scaleRange = ctx.stated.get('history_scale')?.stmt.expr.range;
+    ctx.diag('error', bad.code, bad.message, bad.on === 'scale' ? (scaleRange ?? h.range) : h.range);
+    return null;
+  }
   recordUnitStresses(ctx, h, sec, cA, cM);
 
   // Pass 2: count and sum.

@@ -23,4 +23,5 @@ export {
   type RainflowResult,
   rainflow,
 } from './rainflowCounter';
+export { type ScaledSpreadProblem, scaledSpreadProblem } from './scaledSpread';
 export { TurningPointDetector, turningPoints } from './turningPoints';
