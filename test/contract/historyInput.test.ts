@@ -19,13 +19,14 @@ function evaluate(lines: string[], histories: HistoryChunkReader): { c: CheckRes
 }
 
 /** A reader that serves files from memory, in small chunks (to cross chunk boundaries). */
-function fakeReader(files: Record<string, string>, chunk = 7): HistoryChunkReader {
+function fakeReader(files: Record<string, string | Uint8Array>, chunk = 7): HistoryChunkReader {
   return {
     read(path, onChunk) {
       const body = files[path];
       if (body === undefined)
         return { ok: false, code: 'history-missing', message: `history file \`${path}\` not found` };
-      for (let i = 0; i < body.length; i += chunk) onChunk(body.slice(i, i + chunk));
+      for (let i = 0; i < body.length; i += chunk)
+        onChunk(typeof body === 'string' ? body.slice(i, i + chunk) : body.subarray(i, i + chunk));
       return { ok: true };
     },
   };
@@ -194,6 +195,30 @@ describe('values whose ranges or stresses overflow (issue 16, item 2)', () => {
       fakeReader({ 'loads/h.csv': csvOf(ASTM_FIG6) }),
     );
     expect(c.values.cycles_counted?.si).toBe(0);
+    expectNothingNonFinite(c);
+  });
+});
+
+describe('encodings and giant lines through a damage check (issue 16, items 3 and 4)', () => {
+  it('a UTF-16 BE history with a byte-order mark gives the D of the UTF-8 one, and the information names the encoding', () => {
+    const csv = csvOf(ASTM_FIG6);
+    const be = new Uint8Array(2 + csv.length * 2);
+    be.set([0xfe, 0xff]);
+    for (let i = 0; i < csv.length; i++) be[3 + 2 * i] = csv.charCodeAt(i); // ASCII: high byte 0
+    const u8 = evaluate(HISTORY, fakeReader({ 'loads/h.csv': csv })).c;
+    const u16 = evaluate(HISTORY, fakeReader({ 'loads/h.csv': be }, 5)).c;
+    expect(u16.values.D?.si).toBe(u8.values.D?.si);
+    expect(diag(u16, 'csv-column').message).toContain('Decoded as UTF-16 BE with a byte-order mark');
+  });
+
+  it('a history written on one line of 2 MB: history-line-too-long on the history line, no D', () => {
+    const line = ASTM_FIG6.join(',').repeat(100_000);
+    const { c, text } = evaluate(HISTORY, fakeReader({ 'loads/h.csv': `stress\n${line}\n` }, 65_536));
+    const d = diag(c, 'history-line-too-long');
+    expect(d.severity).toBe('error');
+    expect(d.range.start.line).toBe(lineOf(text, 'history: loads/h.csv'));
+    expect(d.message).toContain('line 2');
+    expect(c.values.D).toBeUndefined();
     expectNothingNonFinite(c);
   });
 });

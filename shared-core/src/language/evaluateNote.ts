@@ -27,10 +27,14 @@ export interface EvaluateOptions {
   /** Per-lint switches by diagnostic code (false turns a lint off). */
   lints?: Record<string, boolean>;
   /**
-   * Milliseconds a check may spend reading its history files (the language server sets it;
-   * unset, as in the command line, reads to the end). See `historyBudget.ts`.
+   * Milliseconds a check may spend reading its history files (the language server sets 3 s,
+   * the command line 120 s; unset reads to the end). See `historyBudget.ts`.
    */
   historyBudgetMs?: number;
+  /** Bytes one read of a history file may pass on (the command line sets 1 GiB; unset: no limit). */
+  historyBudgetBytes?: number;
+  /** Who sets the budgets, for the messages; default `editor`. */
+  historyBudgetBy?: 'editor' | 'command line';
 }
 
 /** Raw mathjs values of a finished check, for `check.name` references in later checks. */

@@ -8,6 +8,8 @@ import { describe, expect, it } from 'vitest';
 import {
   type HistoryCsvOptions,
   HistoryCsvReader,
+  MAX_HISTORY_LINE,
+  parseHistoryNumber,
   RainflowCounter,
   rainflow,
   scaledSpreadProblem,
@@ -141,5 +143,155 @@ describe('ranges and sums that would overflow (item 2)', () => {
     // A constant history (no spread) and ordinary numbers are fine.
     expect(scaledSpreadProblem(3, 3, 1e-320, 1e-320, 'h.csv')).toBeUndefined();
     expect(scaledSpreadProblem(-250, 400, 2.4e5, 2.4e5, 'h.csv')).toBeUndefined();
+  });
+});
+
+/** UTF-16 bytes of `text`, little- or big-endian, with or without a byte-order mark (per the Unicode Standard, Sec. 3.10). */
+function utf16(text: string, bigEndian: boolean, bom: boolean): Uint8Array {
+  const units = (bom ? '\uFEFF' : '') + text;
+  const out = new Uint8Array(units.length * 2);
+  for (let i = 0; i < units.length; i++) {
+    const u = units.charCodeAt(i);
+    out[2 * i + (bigEndian ? 0 : 1)] = u >> 8;
+    out[2 * i + (bigEndian ? 1 : 0)] = u & 0xff;
+  }
+  return out;
+}
+
+function utf8(text: string, bom: boolean): Uint8Array {
+  const body = new TextEncoder().encode(text);
+  if (!bom) return body;
+  const out = new Uint8Array(body.length + 3);
+  out.set([0xef, 0xbb, 0xbf]);
+  out.set(body, 3);
+  return out;
+}
+
+function readBytes(bytes: Uint8Array, cuts: number[] = [], opts: Omit<HistoryCsvOptions, 'onValue'> = {}) {
+  const values: number[] = [];
+  const lines: number[] = [];
+  const r = new HistoryCsvReader({
+    ...opts,
+    onValue: (x, line) => {
+      values.push(x);
+      lines.push(line);
+    },
+  });
+  let at = 0;
+  for (const c of [...cuts, bytes.length]) {
+    r.feed(bytes.subarray(at, Math.max(at, c)));
+    at = Math.max(at, c);
+  }
+  r.end();
+  return { r, values, lines };
+}
+
+describe('encodings and line ends (item 3)', () => {
+  // A history with a header naming a unit in micro-units (a character outside ASCII) and a
+  // character outside the Basic Multilingual Plane in a comment (a surrogate pair in UTF-16).
+  const text = '# logger \u{1F527} v2\r\nM [k\u00b5N*m];t\r\n1,5;0\r\n-2;1\r\n3,25;2\r\n';
+  const expected = [1.5, -2, 3.25];
+  const encodings: Array<[string, Uint8Array, string | undefined]> = [
+    ['UTF-8', utf8(text, false), undefined],
+    ['UTF-8 with a BOM', utf8(text, true), 'UTF-8 with a byte-order mark'],
+    ['UTF-16 LE with a BOM', utf16(text, false, true), 'UTF-16 LE with a byte-order mark'],
+    ['UTF-16 BE with a BOM', utf16(text, true, true), 'UTF-16 BE with a byte-order mark'],
+    ['UTF-16 LE without a BOM', utf16(text, false, false), 'UTF-16 LE without a byte-order mark'],
+    ['UTF-16 BE without a BOM', utf16(text, true, false), 'UTF-16 BE without a byte-order mark'],
+  ];
+  for (const [name, bytes, named] of encodings)
+    it(`${name}: the same numbers whatever the chunk cuts (every cut point, and cuts of 1 byte), the encoding named`, () => {
+      const whole = readBytes(bytes);
+      expect(whole.values).toEqual(expected);
+      expect(whole.lines).toEqual([3, 4, 5]);
+      expect(whole.r.header?.[0]).toBe('M [k\u00b5N*m]');
+      const info = whole.r.issues.find((i) => i.code === 'csv-column')!.message;
+      if (named) expect(info).toContain(`Decoded as ${named}`);
+      else expect(info).not.toContain('Decoded');
+      for (let cut = 0; cut <= bytes.length; cut++) {
+        const part = readBytes(bytes, [cut]);
+        expect(part.values, `cut at ${cut}`).toEqual(expected);
+        expect(part.r.issues, `cut at ${cut}`).toEqual(whole.r.issues);
+      }
+      const ones = readBytes(
+        bytes,
+        Array.from({ length: bytes.length }, (_, i) => i),
+      );
+      expect(ones.values).toEqual(expected);
+      expect(ones.r.issues).toEqual(whole.r.issues);
+    });
+
+  it('CR-only line ends are lines, and a CRLF split between chunks is one line end', () => {
+    const cr = readBytes(utf8('load\r1\r-1\r\r2\r', false));
+    expect(cr.values).toEqual([1, -1, 2]);
+    expect(cr.lines).toEqual([2, 3, 5]);
+    expect(cr.r.blankLineCount).toBe(1);
+    const crlf = utf8('load\r\n1\r\n-1\r\n2\r\n', false);
+    for (let cut = 0; cut <= crlf.length; cut++) {
+      const r = readBytes(crlf, [cut]);
+      expect(r.values, `cut at ${cut}`).toEqual([1, -1, 2]);
+      expect(r.lines, `cut at ${cut}`).toEqual([2, 3, 4]);
+      expect(r.r.blankLineCount, `cut at ${cut}`).toBe(0);
+    }
+  });
+
+  it('bytes that are not UTF-8 become U+FFFD: an error on their row, never an exception', () => {
+    const bytes = new Uint8Array([
+      ...utf8('load\n1\n', false),
+      0xff,
+      0xfe,
+      0x31,
+      0x0a,
+      ...utf8('-1\n2\n', false),
+    ]);
+    const r = readBytes(bytes);
+    expect(r.values).toEqual([1, -1, 2]);
+    expect(r.r.issues.find((i) => i.code === 'csv-non-numeric')?.line).toBe(3);
+  });
+
+  it('an odd byte at the end of a UTF-16 file is U+FFFD, not a lost or invented number', () => {
+    const bytes = utf16('load\n1\n-1\n2\n7', false, true);
+    const r = readBytes(bytes.subarray(0, bytes.length - 1));
+    expect(r.values).toEqual([1, -1, 2]);
+    expect(r.r.issues.find((i) => i.code === 'csv-non-numeric')?.line).toBe(5);
+  });
+});
+
+describe('giant lines (item 4)', () => {
+  it('a 64 MB history on one line: one history-line-too-long error, at most 2^20 characters held, work linear', () => {
+    const piece = new TextEncoder().encode('1.25,'.repeat(13108)); // 65,540 bytes
+    const r = new HistoryCsvReader();
+    let held = 0;
+    let fed = 0;
+    while (fed < 64e6) {
+      r.feed(piece);
+      fed += piece.length;
+      held = Math.max(held, r.heldCharacters);
+    }
+    r.end();
+    expect(held).toBeLessThanOrEqual(MAX_HISTORY_LINE);
+    const long = r.issues.filter((i) => i.code === 'history-line-too-long');
+    expect(long).toHaveLength(1);
+    expect(long[0]).toMatchObject({ line: 1, severity: 'error' });
+    expect(long[0].message).toContain('"1.25,1.25,');
+    expect(r.badRowCount).toBe(1);
+    expect(r.steps).toBeLessThanOrEqual(3 * fed);
+  });
+
+  it('a line just within the limit is read; one character more is an error (the limit of docs/language.md)', () => {
+    const ok = `${'0'.repeat(MAX_HISTORY_LINE - 1)}1\n2\n3\n`;
+    expect(read(ok).values).toEqual([1, 2, 3]);
+    const over = `${'0'.repeat(MAX_HISTORY_LINE)}1\n2\n3\n`;
+    const r = read(over);
+    expect(r.values).toEqual([2, 3]);
+    expect(r.r.issues.find((i) => i.code === 'history-line-too-long')?.line).toBe(1);
+  });
+
+  it('number fields that once backtracked (a million digits then a letter) and header names full of brackets are linear', () => {
+    const digits = `${'1'.repeat(1_000_000)}x`;
+    expect(Number.isNaN(parseHistoryNumber(digits, true))).toBe(true);
+    const header = `${'('.repeat(200_000)},load\n1,2\n3,4\n5,6\n`;
+    const r = read(header, { column: 'load' });
+    expect(r.values).toEqual([2, 4, 6]);
   });
 });
