@@ -33,7 +33,8 @@ export interface HistoryChunkReader {
 const SURFACED = new Set(['criterion-domain', 'load-line']);
 
 export class CheckContext {
-  readonly values: Record<string, Value> = {};
+  /** Without `Object.prototype` behind it: `values[name]` answers for the check's own values only. */
+  readonly values: Record<string, Value> = Object.create(null);
   readonly order: string[] = [];
   readonly diagnostics: Diagnostic[] = [];
   readonly used = new Set<string>();

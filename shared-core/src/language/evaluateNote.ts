@@ -13,7 +13,13 @@ import { ExpressionError, evaluateExpression, type Quantity, rawFromSI, type Sco
 import { type BlockSource, findFatigueBlocks, ID_PATTERN, splitLines } from './markdownBlocks';
 import { BlockSequence } from './noteLoop';
 import { evaluateRequirements } from './requirements';
-import { type AssignStatement, type OptionStatement, parseStatements, type Statement } from './statements';
+import {
+  type AssignStatement,
+  isReservedWord,
+  type OptionStatement,
+  parseStatements,
+  type Statement,
+} from './statements';
 import { type CheckResult, type Diagnostic, lineRange, type Method, type NoteResult, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
 import { editDistance, INPUT_NAMES, MAGNITUDE, nearest, OPTIONS, POSITIVE, RESULT_NAMES } from './vocabulary';
@@ -152,6 +158,12 @@ function checkHeader(ctx: CheckContext, block: BlockSource, seenIds: Map<string,
       'warning',
       'missing-id',
       'this check has no id: write one after `fatigue` (e.g. ```fatigue drive_shaft) so that reports and other checks can name it',
+    );
+  } else if (isReservedWord(block.id)) {
+    ctx.diag(
+      'error',
+      'reserved-name',
+      `\`${block.id}\` cannot be a check id: every JavaScript object has that name, so it is reserved; choose another id (other checks cannot refer to this one)`,
     );
   } else if (!ID_PATTERN.test(block.id)) {
     ctx.diag(
@@ -336,7 +348,7 @@ function readAssign(
       const later = used ? statementsBelow.get(used) : undefined;
       if (later !== undefined && later > s.line)
         message = `${name}: \`${used}\` is stated below, on line ${later + 1}: names are read top to bottom, so move that line above this one`;
-      else if (used && UNIT_SLIPS[used])
+      else if (used && Object.hasOwn(UNIT_SLIPS, used))
         message = `${name}: \`${used}\` is not a unit here: write \`${UNIT_SLIPS[used]}\``;
     }
     ctx.diag('error', err.code, message, r);
