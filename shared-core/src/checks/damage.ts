@@ -479,6 +479,7 @@ function historyPass(
   const rf = counter.finish();
   for (const n of rf.notes)
     if (n.code !== 'history-too-few-points') ctx.diag(n.severity ?? 'warning', n.code, n.message, h.range);
+  if (rf.overflowAt > 0) return null; // the count stopped (residue limit): no damage from part of it
   tally.report(ctx, ev.critRange, 'counted cycles');
   if (staticCount > 0)
     ctx.diag(
