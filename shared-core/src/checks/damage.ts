@@ -34,6 +34,7 @@ import {
   RAINFLOW_SOURCE,
   RainflowCounter,
   RangeMeanHistogram,
+  scaledSpreadProblem,
 } from '../rainflow';
 import type { SnLine } from '../sn';
 import { type DimKey, sameVector, vectorOf } from '../units/dimensions';
@@ -227,6 +228,11 @@ export function runDamage(ctx: CheckContext): MethodExtras {
   if (!pass) return { criterion };
 
   const res = pass.acc.result(10);
+  if (!Number.isFinite(res.D)) {
+    const why = 'the Miner sum overflows (lives too short to divide by: stresses far beyond the strength)';
+    ctx.diag('error', 'damage-overflow', `${why}: check the loads and \`history_scale\``, loadRange);
+    return { criterion };
+  }
   recordDamage(ctx, sec, res, pass, ev, [...baseInputs, ...pass.inputs], loadRange);
   const sn: SnData = {
     a: ev.line.a,
@@ -422,6 +428,17 @@ function historyPass(
   scan.end();
   reportIssues(ctx, scan.issues, h.range, h.path);
   if (scan.fatal || scan.valueCount < 3) return null;
+  if (scan.badRowCount > 0) {
+    // A skipped row may hold the largest load: no damage from what is left.
+    const n = scan.badRowCount;
+    ctx.diag(
+      'information',
+      'results-withheld',
+      `no damage until the ${n} row${n === 1 ? '' : 's'} of \`${h.path}\` without a finite number ${n === 1 ? 'is' : 'are'} fixed: a lost sample may be the largest load of the history`,
+      h.range,
+    );
+    return null;
+  }
 
   // Notch stresses per 1.0 of the file (linear in the load), at each point of the section.
   const absScale = Math.abs(h.scale);
@@ -430,6 +447,15 @@ function historyPass(
   const perA = notchEquivalent(sec, unitLoad(1, 0));
   const perM = notchEquivalent(sec, unitLoad(0, 1));
   const two = sec.points.length > 1;
+  // Overflow of the scaled history, with the largest per-unit stresses of the section's points.
+  const cA = Math.max(...perA.map((x) => Math.abs(x.sa))) * absScale;
+  const cM = Math.max(...perM.map((x) => Math.abs(x.sm) + Math.abs(x.sa))) * Math.abs(h.scale);
+  const bad = scaledSpreadProblem(lo, hi, cA, cM, h.path);
+  if (bad) {
+    const scaleRange = ctx.stated.get('history_scale')?.stmt.expr.range;
+    ctx.diag('error', bad.code, bad.message, bad.on === 'scale' ? (scaleRange ?? h.range) : h.range);
+    return null;
+  }
   recordUnitStresses(ctx, h, sec, perA[0].sa * absScale, perM[0].sm * h.scale, two);
 
   // Pass 2: count once, sum at every point.
@@ -485,6 +511,7 @@ function historyPass(
   const rf = counter.finish();
   for (const n of rf.notes)
     if (n.code !== 'history-too-few-points') ctx.diag(n.severity ?? 'warning', n.code, n.message, h.range);
+  if (rf.overflowAt > 0) return null; // the count stopped (residue limit): no damage from part of it
   // The governing point: the one with more cycles that fail statically, then the larger damage.
   let gov = 0;
   states.forEach((st, k) => {

@@ -32,7 +32,8 @@ const BASE_DIM: Record<LevelBase, DimKey> = {
   tau: 'stress',
 };
 
-const NAMES: Record<string, NameRule> = {};
+/** Without `Object.prototype`: `NAMES[name]` answers for the spectrum's own names only. */
+const NAMES: Record<string, NameRule> = Object.create(null);
 for (const base of Object.keys(BASE_DIM) as LevelBase[]) {
   const parts: Part[] = base === 'sigma_ax' || base === 'tau' ? ['a', 'm'] : ['a', 'm', 'max', 'min'];
   for (const part of parts) NAMES[`${base}_${part}`] = { base, part, dim: BASE_DIM[base] };

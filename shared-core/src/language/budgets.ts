@@ -85,7 +85,7 @@ export function notEvaluated(
     headerRange,
     insertLine: block.closed ? block.closeLine : block.closeLine + 1,
     status: 'error',
-    values: {},
+    values: Object.create(null),
     order: [],
     requirements: [],
     diagnostics: [diagnostic, ...(why.longLines ?? []).map((l) => longLine(l, id))],

@@ -18,17 +18,23 @@ export interface StatedInput {
 }
 
 export interface HistoryChunkReader {
-  /** Calls `onChunk` with the file's text in order; returns an error text instead when it cannot. */
+  /**
+   * Calls `onChunk` with the file in order, as its bytes (which the history reader decodes:
+   * UTF-8, UTF-16 with or without a byte-order mark) or as text already decoded; returns an
+   * error text instead when it cannot. A chunk may be cut anywhere and is not kept after
+   * the call returns.
+   */
   read(
     relativePath: string,
-    onChunk: (chunk: string) => void,
+    onChunk: (chunk: string | Uint8Array) => void,
   ): { ok: true } | { ok: false; code: string; message: string };
 }
 
 const SURFACED = new Set(['criterion-domain', 'load-line']);
 
 export class CheckContext {
-  readonly values: Record<string, Value> = {};
+  /** Without `Object.prototype` behind it: `values[name]` answers for the check's own values only. */
+  readonly values: Record<string, Value> = Object.create(null);
   readonly order: string[] = [];
   readonly diagnostics: Diagnostic[] = [];
   readonly used = new Set<string>();

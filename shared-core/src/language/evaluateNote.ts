@@ -15,7 +15,13 @@ import { type BlockSource, findFatigueBlocks, ID_PATTERN, splitLines } from './m
 import { BlockSequence } from './noteLoop';
 import { checkConsistency, valuePlausibility } from './plausibility';
 import { evaluateRequirements } from './requirements';
-import { type AssignStatement, type OptionStatement, parseStatements, type Statement } from './statements';
+import {
+  type AssignStatement,
+  isReservedWord,
+  type OptionStatement,
+  parseStatements,
+  type Statement,
+} from './statements';
 import { type CheckResult, type Diagnostic, lineRange, type Method, type NoteResult, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
 import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from './vocabulary';
@@ -29,10 +35,14 @@ export interface EvaluateOptions {
   /** Per-lint switches by diagnostic code (false turns a lint off). */
   lints?: Record<string, boolean>;
   /**
-   * Milliseconds a check may spend reading its history files (the language server sets it;
-   * unset, as in the command line, reads to the end). See `historyBudget.ts`.
+   * Milliseconds a check may spend reading its history files (the language server sets 3 s,
+   * the command line 120 s; unset reads to the end). See `historyBudget.ts`.
    */
   historyBudgetMs?: number;
+  /** Bytes one read of a history file may pass on (the command line sets 1 GiB; unset: no limit). */
+  historyBudgetBytes?: number;
+  /** Who sets the budgets, for the messages; default `editor`. */
+  historyBudgetBy?: 'editor' | 'command line';
 }
 
 /** Raw mathjs values of a finished check, for `check.name` references in later checks. */
@@ -152,6 +162,12 @@ function checkHeader(ctx: CheckContext, block: BlockSource, seenIds: Map<string,
       'warning',
       'missing-id',
       'this check has no id: write one after `fatigue` (e.g. ```fatigue drive_shaft) so that reports and other checks can name it',
+    );
+  } else if (isReservedWord(block.id)) {
+    ctx.diag(
+      'error',
+      'reserved-name',
+      `\`${block.id}\` cannot be a check id: every JavaScript object has that name, so it is reserved; choose another id (other checks cannot refer to this one)`,
     );
   } else if (!ID_PATTERN.test(block.id)) {
     ctx.diag(
@@ -352,7 +368,7 @@ function readAssign(
       const later = used ? statementsBelow.get(used) : undefined;
       if (later !== undefined && later > s.line)
         message = `${name}: \`${used}\` is stated below, on line ${later + 1}: names are read top to bottom, so move that line above this one`;
-      else if (used && UNIT_SLIPS[used])
+      else if (used && Object.hasOwn(UNIT_SLIPS, used))
         message = `${name}: \`${used}\` is not a unit here: write \`${UNIT_SLIPS[used]}\``;
     }
     ctx.diag('error', err.code, message, r);
