@@ -41,6 +41,27 @@ export { parseLine, parseStatements, type Statement } from './language/statement
 export * from './language/types';
 export { editDistance, INPUT_NAMES, nameInfo, nearest, OPTIONS, RESULT_NAMES } from './language/vocabulary';
 export { findMaterial, MATERIALS } from './materials';
+export { type CrackGrowthMarks, crackGrowthDiagram } from './methods/crack-growth/diagram';
+export {
+  type CheckDiagram,
+  checkDiagrams,
+  defaultMethod,
+  methodModule,
+  methods,
+  methodTemplates,
+  methodViews,
+  registerMethod,
+} from './methods/registry';
+export { TEMPLATE_UNITS } from './methods/templateParts';
+export type {
+  DiagramSource,
+  MethodDiagram,
+  MethodExtras,
+  MethodHeadline,
+  MethodModule,
+  MethodTemplate,
+  TemplateUnits,
+} from './methods/types';
 export {
   type HistogramBin,
   type HistogramLimits,

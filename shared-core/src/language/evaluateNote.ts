@@ -3,8 +3,9 @@
  * names, units and options, runs the check's method, then its requirements. Never throws:
  * whatever goes wrong inside one check becomes a diagnostic of that check.
  */
-import { reviewCheck, runCheckMethod } from '../checks/runMethod';
+import { copyMethodFields, reviewCheck, runCheckMethod } from '../checks/runMethod';
 import { findMaterial, nearestMaterialKeys } from '../materials';
+import { defaultMethod } from '../methods/registry';
 import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import type { UnitSystem } from '../units/format';
 import type { Unit } from '../units/mathInstance';
@@ -16,7 +17,7 @@ import { BlockSequence } from './noteLoop';
 import { checkConsistency, valuePlausibility } from './plausibility';
 import { evaluateRequirements } from './requirements';
 import { type AssignStatement, type OptionStatement, parseStatements, type Statement } from './statements';
-import { type CheckResult, type Diagnostic, lineRange, type Method, type NoteResult, range } from './types';
+import { type CheckResult, type Diagnostic, lineRange, type NoteResult, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
 import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from './vocabulary';
 
@@ -84,7 +85,7 @@ export function evaluateBlock(
   const raw = new Map<string, Unit | number>();
   const result: CheckResult = {
     id,
-    method: 'stress-life',
+    method: defaultMethod(),
     range: range(block.openLine, 0, block.closeLine, 0),
     headerRange: header,
     insertLine: ctx.insertLine,
@@ -108,7 +109,7 @@ export function evaluateBlock(
     const faults = readStatements(ctx, statements, scope, raw) + checkConsistency(ctx);
     const title = optionMap.get('title')?.value.text;
     if (title) result.title = title;
-    result.method = (ctx.option('method') as Method | undefined) ?? 'stress-life';
+    result.method = ctx.option('method') ?? defaultMethod();
     result.criterion = ctx.option('criterion');
     // An input the author wrote but the tool could not read (wrong unit, misspelt option,
     // unreadable line) would silently change every result: none is produced until it is fixed.
@@ -119,12 +120,7 @@ export function evaluateBlock(
         `no results until the ${faults === 1 ? 'error' : `${faults} errors`} in this check's inputs ${faults === 1 ? 'is' : 'are'} fixed: a misread input would change them`,
       );
     const extras = faults > 0 ? {} : runCheckMethod(result.method, ctx);
-    if (extras.haigh) result.haigh = extras.haigh;
-    if (extras.sn) result.sn = extras.sn;
-    if (extras.tables) result.tables = extras.tables;
-    if (extras.crackCurve) result.crackCurve = extras.crackCurve;
-    if (extras.histogram) result.histogram = extras.histogram;
-    if (extras.criterion) result.criterion = extras.criterion;
+    copyMethodFields(result.method, extras, result as unknown as Record<string, unknown>);
     const requireStatements = statements.filter((s) => s.kind === 'require');
     const hasErrors = ctx.diagnostics.some((d) => d.severity === 'error');
     result.requirements = evaluateRequirements(ctx, requireStatements, scope, faults > 0);
