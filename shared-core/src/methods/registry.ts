@@ -5,6 +5,7 @@
  */
 import type { DiagramOptions } from '../diagrams/frame';
 import type { CheckResult } from '../language/types';
+import { declareMethodWord } from '../language/vocabulary';
 import { crackGrowth } from './crack-growth';
 import { damage } from './damage';
 import { stressLife } from './stress-life';
@@ -12,6 +13,13 @@ import type { DiagramSource, MethodHeadline, MethodModule, MethodTemplate } from
 
 /** The methods, the default (no `method:` stated) first. */
 const METHODS: MethodModule[] = [stressLife, damage, crackGrowth];
+
+const withdraw = new Map<string, () => void>();
+function declare(m: MethodModule): void {
+  withdraw.get(m.name)?.();
+  withdraw.set(m.name, declareMethodWord(m.name, m.meaning, m === METHODS[0]));
+}
+for (const m of METHODS) declare(m);
 
 /** Every registered method, the default first. */
 export function methods(): readonly MethodModule[] {
@@ -36,11 +44,18 @@ export function registerMethod(m: MethodModule): () => void {
   const previous = i >= 0 ? METHODS[i] : undefined;
   if (i >= 0) METHODS[i] = m;
   else METHODS.push(m);
+  declare(m);
   return () => {
     const j = METHODS.indexOf(m);
     if (j < 0) return;
-    if (previous) METHODS[j] = previous;
-    else METHODS.splice(j, 1);
+    if (previous) {
+      METHODS[j] = previous;
+      declare(previous);
+    } else {
+      METHODS.splice(j, 1);
+      withdraw.get(m.name)?.();
+      withdraw.delete(m.name);
+    }
   };
 }
 

@@ -74,6 +74,8 @@ export interface MethodModule {
   headline: MethodHeadline;
   diagrams?: readonly MethodDiagram[];
   templates: readonly MethodTemplate[];
+  /** The `fatigue` snippet the completion offers at the start of a line (VS Code snippet syntax). */
+  snippet: { label: string; body(): string[] };
   /** Options whose default the check evidently used (assumptions register), judged from its values. */
   defaultedOptions?: Readonly<Record<string, (c: CheckResult) => boolean>>;
 }

@@ -29,6 +29,24 @@ export const crackGrowth: MethodModule = {
           : null,
     },
   ],
+  snippet: {
+    label: 'fatigue check: crack growth',
+    body: () => [
+      '```fatigue ${1:check_id}',
+      'title: ${2:what is checked}',
+      'method: crack-growth',
+      'C_paris = ${3:Paris coefficient}',
+      'm_paris = ${4:Paris exponent}',
+      'Y = ${5:geometry factor}',
+      'a_i = ${6:initial crack} mm',
+      'K_IC = ${7:fracture toughness} MPa*m^0.5',
+      'sigma_max = ${8:largest stress} MPa',
+      'sigma_min = ${9:smallest stress} MPa',
+      'require: N_cg >= ${10:required cycles}',
+      '```',
+      '$0',
+    ],
+  },
   templates: [
     {
       kind: 'crack-growth',

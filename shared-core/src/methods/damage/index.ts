@@ -2,6 +2,8 @@
 /** `method: damage`: Palmgren-Miner damage of a load history or spectrum at a section. */
 import { assumedFamily } from '../../checks/review';
 import { HISTOGRAM_DIAGRAM, SN_DIAGRAM } from '../../diagrams/drawers';
+import { OPTIONS } from '../../language/vocabulary';
+import { MATERIALS } from '../../materials';
 import { materialLines, sectionLines } from '../templateParts';
 import type { MethodModule } from '../types';
 import { runDamage } from './pipeline';
@@ -21,6 +23,23 @@ export const damage: MethodModule = {
     life: ['D', 'N_f'],
   },
   diagrams: [SN_DIAGRAM, HISTOGRAM_DIAGRAM],
+  snippet: {
+    label: 'fatigue check: damage (spectrum)',
+    body: () => [
+      '```fatigue ${1:check_id}',
+      'title: ${2:what is checked}',
+      'method: damage',
+      'material: ${3|' + MATERIALS.map((m) => m.key).join(',') + '|}',
+      'surface: ${4|' + Object.keys(OPTIONS.surface.values ?? {}).join(',') + '|}',
+      'd = ${5:diameter} mm',
+      'spectrum: M_a = ${6:amplitude} N*m, M_m = ${7:mean} N*m, n = ${8:cycles}',
+      'miner: ${9|original,elementary,haibach|}',
+      'criterion: ${10|goodman,gerber,soderberg,asme-elliptic|}',
+      'require: D <= ${11:allowed damage}',
+      '```',
+      '$0',
+    ],
+  },
   templates: [
     {
       kind: 'damage',

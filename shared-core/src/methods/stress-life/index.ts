@@ -2,6 +2,8 @@
 /** `method: stress-life`: safety factors and life of a section from the S-N approach. */
 import { assumedFamily, hiddenFiniteLife } from '../../checks/review';
 import { HAIGH_DIAGRAM, SN_DIAGRAM } from '../../diagrams/drawers';
+import { OPTIONS } from '../../language/vocabulary';
+import { MATERIALS } from '../../materials';
 import { loadLines, materialLines, sectionLines } from '../templateParts';
 import type { MethodModule } from '../types';
 import { runStressLife } from './pipeline';
@@ -22,6 +24,22 @@ export const stressLife: MethodModule = {
     life: ['N_f'],
   },
   diagrams: [HAIGH_DIAGRAM, SN_DIAGRAM],
+  snippet: {
+    label: 'fatigue check: stress-life',
+    body: () => [
+      '```fatigue ${1:check_id}',
+      'title: ${2:what is checked}',
+      'material: ${3|' + MATERIALS.map((m) => m.key).join(',') + '|}',
+      'surface: ${4|' + Object.keys(OPTIONS.surface.values ?? {}).join(',') + '|}',
+      'd = ${5:diameter} mm',
+      'M_max = ${6:largest moment} N*m',
+      'M_min = ${7:smallest moment} N*m',
+      'criterion: ${8|goodman,gerber,soderberg,asme-elliptic|}',
+      'require: n_f >= ${9:required factor}, n_y >= ${10:required factor}',
+      '```',
+      '$0',
+    ],
+  },
   templates: [
     {
       kind: 'stress-life',
