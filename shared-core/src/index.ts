@@ -33,7 +33,7 @@ export {
 export * from './design';
 export * from './diagrams';
 export type { HistoryChunkReader } from './language/checkContext';
-export { type EvaluateOptions, evaluateNote } from './language/evaluateNote';
+export type { EvaluateOptions } from './language/checkScope';
 export { compileExpression, ExpressionError, evaluateExpression } from './language/expressions';
 export { headlineValues } from './language/headline';
 export { type BlockSource, findFatigueBlocks, splitLines } from './language/markdownBlocks';
@@ -62,6 +62,7 @@ export type {
   MethodTemplate,
   TemplateUnits,
 } from './methods/types';
+export { evaluateNote } from './note/evaluateNote';
 export {
   type HistogramBin,
   type HistogramLimits,

@@ -5,7 +5,7 @@
  * lines) and low enough that the largest block allowed evaluates in milliseconds.
  */
 import { defaultMethod } from '../methods/registry';
-import type { CheckScopeEntry } from './evaluateNote';
+import type { CheckScopeEntry } from './checkScope';
 import { MAX_EXPRESSION_LENGTH } from './expressions';
 import { type BlockSource, ID_PATTERN } from './markdownBlocks';
 import { type CheckResult, type Diagnostic, lineRange, range } from './types';

@@ -1,7 +1,7 @@
 /**
- * Evaluates every fatigue block of a note, top to bottom: reads the statements, checks
- * names, units and options, runs the check's method, then its requirements. Never throws:
- * whatever goes wrong inside one check becomes a diagnostic of that check.
+ * Evaluates one fatigue block: reads the statements, checks names, units and options, runs
+ * the check's method, then its requirements. Never throws: whatever goes wrong inside the
+ * check becomes a diagnostic of that check. The note's loop is `note/noteLoop.ts`.
  */
 import { copyMethodFields, reviewCheck, runCheckMethod } from '../checks/runMethod';
 import { findMaterial, nearestMaterialKeys } from '../materials';
@@ -9,53 +9,16 @@ import { defaultMethod } from '../methods/registry';
 import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import type { UnitSystem } from '../units/format';
 import type { Unit } from '../units/mathInstance';
-import { limitBlocks } from './budgets';
-import { CheckContext, type HistoryChunkReader, type StatedInput } from './checkContext';
+import { CheckContext, type StatedInput } from './checkContext';
+import type { CheckScopeEntry, EvaluateOptions } from './checkScope';
 import { ExpressionError, evaluateExpression, type Quantity, rawFromSI, type Scope } from './expressions';
-import { type BlockSource, findFatigueBlocks, ID_PATTERN, splitLines } from './markdownBlocks';
-import { BlockSequence } from './noteLoop';
+import { type BlockSource, ID_PATTERN } from './markdownBlocks';
 import { checkConsistency, valuePlausibility } from './plausibility';
 import { evaluateRequirements } from './requirements';
 import { type AssignStatement, type OptionStatement, parseStatements, type Statement } from './statements';
-import { type CheckResult, type Diagnostic, lineRange, type NoteResult, range } from './types';
+import { type CheckResult, lineRange, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
 import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from './vocabulary';
-
-export interface EvaluateOptions {
-  /** Display units; 'auto' follows the units the note is written in. */
-  unitSystem?: UnitSystem | 'auto';
-  significantDigits?: number;
-  /** Reads history files for `method: damage`; without it such checks say the file cannot be read here. */
-  histories?: HistoryChunkReader;
-  /** Per-lint switches by diagnostic code (false turns a lint off). */
-  lints?: Record<string, boolean>;
-  /**
-   * Milliseconds a check may spend reading its history files (the language server sets it;
-   * unset, as in the command line, reads to the end). See `historyBudget.ts`.
-   */
-  historyBudgetMs?: number;
-}
-
-/** Raw mathjs values of a finished check, for `check.name` references in later checks. */
-export interface CheckScopeEntry {
-  result: CheckResult;
-  raw: Map<string, Unit | number>;
-}
-
-export function evaluateNote(text: string, options: EvaluateOptions = {}): NoteResult {
-  const lines = splitLines(text);
-  const blocks = limitBlocks(findFatigueBlocks(text, lines));
-  const sequence = new BlockSequence(options);
-  const checks: CheckResult[] = [];
-  const diagnostics: Diagnostic[] = [];
-  for (let i = 0; i < blocks.length; i++) {
-    const entry = sequence.evaluate(blocks[i], i);
-    sequence.add(entry);
-    checks.push(entry.result);
-    for (const d of entry.result.diagnostics) diagnostics.push(d);
-  }
-  return { checks, diagnostics };
-}
 
 export function evaluateBlock(
   block: BlockSource,
