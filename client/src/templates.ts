@@ -1,10 +1,9 @@
-// biome-ignore-all lint/suspicious/noTemplateCurlyInString: these strings are VS Code snippets (${1:...} tab stops), not templates
 /**
  * Templates of new checks: each method declares its own in the core (`methods/<method>/`);
  * inputs the engineer must supply are `?` placeholders (an error until filled), never
  * made-up numbers.
  */
-import { methodTemplates, TEMPLATE_UNITS } from '@fatigue-notes/core';
+import { methodTemplates, templateSnippetOf } from '@fatigue-notes/core';
 
 export type TemplateKind = string;
 
@@ -35,7 +34,5 @@ export function freshId(noteText: string, stem: string): string {
 
 /** The check as a VS Code snippet (tab stops, choices); `?` marks what must be filled in. */
 export function templateSnippet(kind: TemplateKind, id: string, system: 'SI' | 'US'): string {
-  const t = methodTemplates().find((x) => x.kind === kind) ?? methodTemplates()[0];
-  const head = [`\`\`\`fatigue \${1:${id}}`, `title: \${2:what is checked, and where}`];
-  return [...head, ...t.body(TEMPLATE_UNITS[system]), '```', '$0'].join('\n');
+  return templateSnippetOf(kind, id, system);
 }

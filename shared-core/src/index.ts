@@ -51,6 +51,7 @@ export {
   methodTemplates,
   methodViews,
   registerMethod,
+  templateSnippetOf,
 } from './methods/registry';
 export { TEMPLATE_UNITS } from './methods/templateParts';
 export type {

@@ -1,3 +1,4 @@
+// biome-ignore-all lint/suspicious/noTemplateCurlyInString: these strings are VS Code snippets (${1:...} tab stops), not templates
 /**
  * The registry of check methods: every view (completion, hover, headline, preview, panel,
  * report, templates, assumptions register, docs tests) reads it and none names a method.
@@ -9,6 +10,7 @@ import { declareMethodWord } from '../language/vocabulary';
 import { crackGrowth } from './crack-growth';
 import { damage } from './damage';
 import { stressLife } from './stress-life';
+import { TEMPLATE_UNITS } from './templateParts';
 import type { DiagramSource, MethodHeadline, MethodModule, MethodTemplate } from './types';
 
 /** The methods, the default (no `method:` stated) first. */
@@ -97,4 +99,12 @@ export function checkDiagrams(check: DiagramSource, options: Partial<DiagramOpti
     if (svg !== null) out.push({ kind: d.kind, title: d.title, svg });
   }
   return out;
+}
+
+/** A template as a whole VS Code snippet (fence, id, title, body); unknown kind: the first template. */
+export function templateSnippetOf(kind: string, id: string, system: 'SI' | 'US'): string {
+  const all = methodTemplates();
+  const t = all.find((x) => x.kind === kind) ?? all[0];
+  const head = [`\`\`\`fatigue \${1:${id}}`, `title: \${2:what is checked, and where}`];
+  return [...head, ...t.body(TEMPLATE_UNITS[system]), '```', '$0'].join('\n');
 }
