@@ -3,7 +3,7 @@
  * requirements and its status. The note is evaluated by the core in-process (it is pure);
  * load-history files are not read here, so a damage check driven by a history says so.
  */
-import { type CheckResult, evaluateNote } from '@fatigue-notes/core';
+import { type CheckResult, evaluateNote, methodViews } from '@fatigue-notes/core';
 
 /** The parts of markdown-it this plugin uses (the preview passes its own instance). */
 export interface MarkdownItLike {
@@ -37,12 +37,6 @@ export interface PreviewSettings {
 }
 
 const META_KEY = 'fatigueNotesResults';
-/** The results shown under a block, by method (`D` is the damage of a damage check, a diameter elsewhere). */
-const SHOWN: Record<CheckResult['method'], string[]> = {
-  'stress-life': ['n_f', 'n_y', 'N_f', 'S_f', 'Se', 'sigma_a_eq', 'sigma_m_eq'],
-  damage: ['D', 'repeats', 'N_eq', 'n_y'],
-  'crack-growth': ['a_c', 'N_cg', 'N_insp'],
-};
 const STATUS: Record<CheckResult['status'], string> = {
   pass: '✓ pass',
   fail: '✗ fail',
@@ -86,8 +80,8 @@ export function fatiguePreviewPlugin(md: MarkdownItLike, settings: () => Preview
 }
 
 export function renderCheck(c: CheckResult, esc: (s: string) => string): string {
-  const rows = (SHOWN[c.method] ?? SHOWN['stress-life'])
-    .filter((n) => c.values[n])
+  const rows = methodViews(c.method)
+    .preview.filter((n) => c.values[n])
     .map((n) => {
       const v = c.values[n];
       return `<tr><th scope="row"><code>${esc(n)}</code></th><td class="fatigue-notes-num">${esc(v.display)}</td><td>${esc(v.meaning)}</td></tr>`;

@@ -3,15 +3,9 @@
  * and for every check its requirements, diagrams (drawn by the core) and derivation list.
  * A view: every number is one the core computed and formatted.
  */
-import { checkDiagrams } from '@fatigue-notes/core';
+import { checkDiagrams, methodViews } from '@fatigue-notes/core';
 import { problemCounts, type SummaryCheck } from '../summary';
 import type { Cell, DerivationItem, PanelDetail, PanelModel, PanelRow } from './protocol';
-
-const LIFE_NAMES: Record<string, string[]> = {
-  'stress-life': ['N_f'],
-  damage: ['D', 'N_f'],
-  'crack-growth': ['N_cg', 'N_f'],
-};
 
 function cell(check: SummaryCheck, name: string): Cell {
   const v = check.values?.[name];
@@ -27,7 +21,7 @@ export function rowKey(check: SummaryCheck, index: number): string {
 export function buildRows(checks: readonly SummaryCheck[]): PanelRow[] {
   return checks.map((c, index) => {
     const lifeName =
-      (LIFE_NAMES[c.method] ?? ['N_f']).find((n) => c.values?.[n]) ?? LIFE_NAMES[c.method]?.[0] ?? 'N_f';
+      methodViews(c.method).life.find((n) => c.values?.[n]) ?? methodViews(c.method).life[0] ?? 'N_f';
     return {
       index,
       key: rowKey(c, index),

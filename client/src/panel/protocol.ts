@@ -17,7 +17,7 @@ export interface PanelRow {
   criterion: string;
   n_f: Cell;
   n_y: Cell;
-  /** `N_f` for a stress-life check, `D` for damage, `N_cg` for crack growth. */
+  /** The first of the method's life names the check has (`methodViews(method).life`). */
   life: Cell & { name: string };
   status: 'pass' | 'fail' | 'error' | 'unchecked';
   /** 1-based line of the block's opening fence, for screen readers and tooltips. */

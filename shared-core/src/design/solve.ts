@@ -29,7 +29,7 @@
  */
 import type { Term } from '../computed';
 import type { StatedInput } from '../language/checkContext';
-import type { CheckScopeEntry } from '../language/evaluateNote';
+import type { CheckScopeEntry } from '../language/checkScope';
 import { ExpressionError, evaluateExpression, rawFromSI, type Scope } from '../language/expressions';
 import type { BlockSource } from '../language/markdownBlocks';
 import {

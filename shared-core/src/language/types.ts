@@ -92,7 +92,8 @@ export interface RequirementResult {
 }
 
 export type CheckStatus = 'pass' | 'fail' | 'error' | 'unchecked';
-export type Method = 'stress-life' | 'damage' | 'crack-growth';
+/** The value of `method:`: one of the registry's methods (`methods/registry.ts`). */
+export type Method = string;
 
 export interface HaighData {
   /** All stresses in Pa. `S` is Se or the fatigue strength at the required life. */
@@ -120,7 +121,24 @@ export interface SnData {
   points: Array<{ label: string; sigma_ar: number; N: number | null; count?: number }>;
 }
 
-export interface CheckResult {
+/**
+ * The per-method records of a check (diagram data, tables). A method that needs a new one
+ * adds it in its own folder by augmenting this interface
+ * (`declare module '../../language/types' { interface MethodFields { ... } }`) and lists it
+ * in its module's `fields`.
+ */
+export interface MethodFields {
+  haigh?: HaighData;
+  sn?: SnData;
+  /** Extra per-method tables (damage contributors, crack size against cycles ...). */
+  tables?: Array<{ title: string; columns: string[]; rows: string[][] }>;
+  /** Crack size against cycles, for a crack-growth check (metres, cycles). */
+  crackCurve?: Array<[number, number]>;
+  /** Rainflow range-mean histogram, for a damage check with a history. */
+  histogram?: { rangeEdges: number[]; meanEdges: number[]; counts: number[][]; unit: string };
+}
+
+export interface CheckResult extends MethodFields {
   id: string | null;
   title?: string;
   method: Method;
@@ -138,14 +156,6 @@ export interface CheckResult {
   requirements: RequirementResult[];
   diagnostics: Diagnostic[];
   unitSystem: 'SI' | 'US';
-  haigh?: HaighData;
-  sn?: SnData;
-  /** Extra per-method tables (damage contributors, crack size against cycles ...). */
-  tables?: Array<{ title: string; columns: string[]; rows: string[][] }>;
-  /** Crack size against cycles, for a crack-growth check (metres, cycles). */
-  crackCurve?: Array<[number, number]>;
-  /** Rainflow range-mean histogram, for a damage check with a history. */
-  histogram?: { rangeEdges: number[]; meanEdges: number[]; counts: number[][]; unit: string };
 }
 
 export interface NoteResult {

@@ -249,12 +249,8 @@ const OPTION_TABLE: Record<string, OptionInfo> = {
   },
   method: {
     meaning: 'what the check computes',
-    values: {
-      'stress-life': 'safety factors and life from the S-N approach',
-      damage: 'Palmgren-Miner damage of a load history or spectrum',
-      'crack-growth': 'Paris-law crack growth life and inspection interval',
-    },
-    default: 'stress-life',
+    // One word per registered method, declared by the registry (methods/registry.ts).
+    values: {},
   },
   miner: {
     meaning: 'how cycles below the knee of the S-N line count',
@@ -301,6 +297,22 @@ export const OPTIONS: Record<string, OptionInfo> = ownWords(
     Object.entries(OPTION_TABLE).map(([k, v]) => [k, v.values ? { ...v, values: ownWords(v.values) } : v]),
   ),
 );
+
+/**
+ * Declares a word of `method:` (the registry of methods calls it for each method it lists,
+ * the first as the default); returns a function that withdraws it.
+ */
+export function declareMethodWord(name: string, meaning: string, isDefault: boolean): () => void {
+  const option = OPTIONS.method;
+  const values = option.values ?? ownWords({});
+  option.values = values;
+  values[name] = meaning;
+  if (isDefault) option.default = name;
+  return () => {
+    delete values[name];
+    if (option.default === name) option.default = undefined;
+  };
+}
 
 export function nameInfo(name: string): NameInfo | undefined {
   return INPUT_NAMES[name] ?? RESULT_NAMES[name];

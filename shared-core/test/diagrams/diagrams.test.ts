@@ -2,14 +2,10 @@ import { unit } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { CONTRACT_BLOCK } from '../../../test/fixtures/contractBlock';
 import { evaluateNote } from '../../src';
-import {
-  checkDiagrams,
-  crackGrowthDiagram,
-  haighDiagram,
-  histogramDiagram,
-  snDiagram,
-} from '../../src/diagrams';
+import { haighDiagram, histogramDiagram, snDiagram } from '../../src/diagrams';
 import type { CheckResult, HaighData, SnData } from '../../src/language/types';
+import { crackGrowthDiagram } from '../../src/methods/crack-growth/diagram';
+import { checkDiagrams } from '../../src/methods/registry';
 import { axisFromTicks, findAll, hasClass, parseXml, textOf, walk, type XmlNode } from './parseSvg';
 
 // Sample notes (the contract's example and variations of it): the numbers under test are the

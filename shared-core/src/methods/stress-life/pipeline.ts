@@ -3,22 +3,9 @@
  * the corrected endurance limit, safety factors by every criterion along the chosen load
  * line, first-cycle yield, fatigue strength at a required life and the predicted life.
  */
-import { type Computed, computed, type MethodNote } from '../computed';
-import {
-  type CriterionKey,
-  criterionModel,
-  fatigueSafetyFactor,
-  firstCycleYieldFactor,
-  langerLine,
-} from '../criteria';
-import type { CheckContext } from '../language/checkContext';
-import type { HaighData, SnData } from '../language/types';
-import { nameInfo } from '../language/vocabulary';
-import { lifeAtStress, strengthAtLife } from '../sn';
-import { type EquivalentStresses, equivalentStresses, pointEquivalentStresses } from '../stress';
-import { biaxialVonMises } from '../stress/biaxial';
-import { concentration } from './concentration';
-import { chooseCriterion, needsYield, strengthSetFor } from './criterionChoice';
+
+import { concentration } from '../../checks/concentration';
+import { chooseCriterion, needsYield, strengthSetFor } from '../../checks/criterionChoice';
 import {
   fibrePoints,
   governingIndex,
@@ -29,12 +16,26 @@ import {
   pointName,
   type SectionPoint,
   warnRotationAssumed,
-} from './criticalPoints';
-import { enduranceChain, type LoadKind } from './enduranceChain';
-import { lazyField } from './lazyField';
-import { active, nominalStresses } from './loads';
-import { readStrengths } from './material';
-import type { MethodExtras } from './runMethod';
+} from '../../checks/criticalPoints';
+import { enduranceChain, type LoadKind } from '../../checks/enduranceChain';
+import { lazyField } from '../../checks/lazyField';
+import { active, nominalStresses } from '../../checks/loads';
+import { readStrengths } from '../../checks/material';
+import { type Computed, computed, type MethodNote } from '../../computed';
+import {
+  type CriterionKey,
+  criterionModel,
+  fatigueSafetyFactor,
+  firstCycleYieldFactor,
+  langerLine,
+} from '../../criteria';
+import type { CheckContext } from '../../language/checkContext';
+import type { HaighData, SnData } from '../../language/types';
+import { nameInfo } from '../../language/vocabulary';
+import { lifeAtStress, strengthAtLife } from '../../sn';
+import { type EquivalentStresses, equivalentStresses, pointEquivalentStresses } from '../../stress';
+import { biaxialVonMises } from '../../stress/biaxial';
+import type { MethodExtras } from '../types';
 
 const COMPARED: Array<[CriterionKey, string]> = [
   ['goodman', 'n_f_goodman'],

@@ -1,18 +1,18 @@
 /**
- * Evaluates every fatigue block of a note, top to bottom: reads the statements, checks
- * names, units and options, runs the check's method, then its requirements. Never throws:
- * whatever goes wrong inside one check becomes a diagnostic of that check.
+ * Evaluates one fatigue block: reads the statements, checks names, units and options, runs
+ * the check's method, then its requirements. Never throws: whatever goes wrong inside the
+ * check becomes a diagnostic of that check. The note's loop is `note/noteLoop.ts`.
  */
-import { reviewCheck, runCheckMethod } from '../checks/runMethod';
+import { copyMethodFields, reviewCheck, runCheckMethod } from '../checks/runMethod';
 import { findMaterial, nearestMaterialKeys } from '../materials';
+import { defaultMethod } from '../methods/registry';
 import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import type { UnitSystem } from '../units/format';
 import type { Unit } from '../units/mathInstance';
-import { limitBlocks } from './budgets';
-import { CheckContext, type HistoryChunkReader, type StatedInput } from './checkContext';
+import { CheckContext, type StatedInput } from './checkContext';
+import type { CheckScopeEntry, EvaluateOptions } from './checkScope';
 import { ExpressionError, evaluateExpression, type Quantity, rawFromSI, type Scope } from './expressions';
-import { type BlockSource, findFatigueBlocks, ID_PATTERN, splitLines } from './markdownBlocks';
-import { BlockSequence } from './noteLoop';
+import { type BlockSource, ID_PATTERN } from './markdownBlocks';
 import { checkConsistency, valuePlausibility } from './plausibility';
 import { evaluateRequirements } from './requirements';
 import {
@@ -22,49 +22,9 @@ import {
   parseStatements,
   type Statement,
 } from './statements';
-import { type CheckResult, type Diagnostic, lineRange, type Method, type NoteResult, range } from './types';
+import { type CheckResult, lineRange, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
 import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from './vocabulary';
-
-export interface EvaluateOptions {
-  /** Display units; 'auto' follows the units the note is written in. */
-  unitSystem?: UnitSystem | 'auto';
-  significantDigits?: number;
-  /** Reads history files for `method: damage`; without it such checks say the file cannot be read here. */
-  histories?: HistoryChunkReader;
-  /** Per-lint switches by diagnostic code (false turns a lint off). */
-  lints?: Record<string, boolean>;
-  /**
-   * Milliseconds a check may spend reading its history files (the language server sets 3 s,
-   * the command line 120 s; unset reads to the end). See `historyBudget.ts`.
-   */
-  historyBudgetMs?: number;
-  /** Bytes one read of a history file may pass on (the command line sets 1 GiB; unset: no limit). */
-  historyBudgetBytes?: number;
-  /** Who sets the budgets, for the messages; default `editor`. */
-  historyBudgetBy?: 'editor' | 'command line';
-}
-
-/** Raw mathjs values of a finished check, for `check.name` references in later checks. */
-export interface CheckScopeEntry {
-  result: CheckResult;
-  raw: Map<string, Unit | number>;
-}
-
-export function evaluateNote(text: string, options: EvaluateOptions = {}): NoteResult {
-  const lines = splitLines(text);
-  const blocks = limitBlocks(findFatigueBlocks(text, lines));
-  const sequence = new BlockSequence(options);
-  const checks: CheckResult[] = [];
-  const diagnostics: Diagnostic[] = [];
-  for (let i = 0; i < blocks.length; i++) {
-    const entry = sequence.evaluate(blocks[i], i);
-    sequence.add(entry);
-    checks.push(entry.result);
-    for (const d of entry.result.diagnostics) diagnostics.push(d);
-  }
-  return { checks, diagnostics };
-}
 
 export function evaluateBlock(
   block: BlockSource,
@@ -94,7 +54,7 @@ export function evaluateBlock(
   const raw = new Map<string, Unit | number>();
   const result: CheckResult = {
     id,
-    method: 'stress-life',
+    method: defaultMethod(),
     range: range(block.openLine, 0, block.closeLine, 0),
     headerRange: header,
     insertLine: ctx.insertLine,
@@ -118,7 +78,7 @@ export function evaluateBlock(
     const faults = readStatements(ctx, statements, scope, raw) + checkConsistency(ctx);
     const title = optionMap.get('title')?.value.text;
     if (title) result.title = title;
-    result.method = (ctx.option('method') as Method | undefined) ?? 'stress-life';
+    result.method = ctx.option('method') ?? defaultMethod();
     result.criterion = ctx.option('criterion');
     // An input the author wrote but the tool could not read (wrong unit, misspelt option,
     // unreadable line) would silently change every result: none is produced until it is fixed.
@@ -129,12 +89,7 @@ export function evaluateBlock(
         `no results until the ${faults === 1 ? 'error' : `${faults} errors`} in this check's inputs ${faults === 1 ? 'is' : 'are'} fixed: a misread input would change them`,
       );
     const extras = faults > 0 ? {} : runCheckMethod(result.method, ctx);
-    if (extras.haigh) result.haigh = extras.haigh;
-    if (extras.sn) result.sn = extras.sn;
-    if (extras.tables) result.tables = extras.tables;
-    if (extras.crackCurve) result.crackCurve = extras.crackCurve;
-    if (extras.histogram) result.histogram = extras.histogram;
-    if (extras.criterion) result.criterion = extras.criterion;
+    copyMethodFields(result.method, extras, result as unknown as Record<string, unknown>);
     const requireStatements = statements.filter((s) => s.kind === 'require');
     const hasErrors = ctx.diagnostics.some((d) => d.severity === 'error');
     result.requirements = evaluateRequirements(ctx, requireStatements, scope, faults > 0);

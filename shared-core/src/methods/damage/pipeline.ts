@@ -15,8 +15,15 @@
  * the chosen criterion -> cycles to failure on the S-N line under the chosen Miner rule.
  * In a damage check `D` names the damage (a result), not the shoulder diameter.
  */
-import { type Computed, computed, type MethodNote, MPA } from '../computed';
-import { type CriterionModel, criterionModel, type StrengthSet } from '../criteria';
+
+import { chooseCriterion, needsYield, strengthSetFor } from '../../checks/criterionChoice';
+import { governingIndex, governingNote, pointName, warnRotationAssumed } from '../../checks/criticalPoints';
+import { enduranceChain } from '../../checks/enduranceChain';
+import { readStrengths } from '../../checks/material';
+import { type LevelBase, readSpectrumLevels, type SpectrumLevel } from '../../checks/spectrumLevels';
+import { type DamageSection, damageSection, notchEquivalent } from '../../checks/unitLoadStresses';
+import { type Computed, computed, type MethodNote, MPA } from '../../computed';
+import { type CriterionModel, criterionModel, type StrengthSet } from '../../criteria';
 import {
   cyclesToFailure,
   equivalentCycles,
@@ -24,9 +31,9 @@ import {
   type MinerResult,
   type MinerRule,
   repeatsToFailure,
-} from '../damage';
-import type { CheckContext } from '../language/checkContext';
-import type { CheckResult, Range, Severity, SnData } from '../language/types';
+} from '../../damage';
+import type { CheckContext } from '../../language/checkContext';
+import type { CheckResult, Range, Severity, SnData } from '../../language/types';
 import {
   HistoryCsvReader,
   type HistoryIssue,
@@ -35,17 +42,11 @@ import {
   RainflowCounter,
   RangeMeanHistogram,
   scaledSpreadProblem,
-} from '../rainflow';
-import type { SnLine } from '../sn';
-import { type DimKey, sameVector, vectorOf } from '../units/dimensions';
-import { displayUnit, formatNumber, toDisplayNumber } from '../units/format';
-import { chooseCriterion, needsYield, strengthSetFor } from './criterionChoice';
-import { governingIndex, governingNote, pointName, warnRotationAssumed } from './criticalPoints';
-import { enduranceChain } from './enduranceChain';
-import { readStrengths } from './material';
-import type { MethodExtras } from './runMethod';
-import { type LevelBase, readSpectrumLevels, type SpectrumLevel } from './spectrumLevels';
-import { type DamageSection, damageSection, notchEquivalent } from './unitLoadStresses';
+} from '../../rainflow';
+import type { SnLine } from '../../sn';
+import { type DimKey, sameVector, vectorOf } from '../../units/dimensions';
+import { displayUnit, formatNumber, toDisplayNumber } from '../../units/format';
+import type { MethodExtras } from '../types';
 
 export type HistoryLoad = 'bending' | 'torsion' | 'axial' | 'pressure' | 'stress';
 
