@@ -314,6 +314,48 @@ export function declareMethodWord(name: string, meaning: string, isDefault: bool
   };
 }
 
+/** The words a method declares beside the shared ones (`MethodModule.words`). */
+export interface MethodWords {
+  inputs?: Record<string, NameInfo>;
+  results?: Record<string, NameInfo>;
+  options?: Record<string, OptionInfo>;
+  /** Of its inputs and results, those that must be strictly positive. */
+  positive?: readonly string[];
+}
+
+/**
+ * Declares a method's own words (the registry calls it for each method); returns a function
+ * that withdraws them. A word already declared by another table is left as it is.
+ */
+export function declareMethodWords(words: MethodWords | undefined): () => void {
+  if (!words) return () => {};
+  const added: Array<() => void> = [];
+  const put = <T>(table: Record<string, T>, entries: Record<string, T> | undefined) => {
+    for (const [k, v] of Object.entries(entries ?? {})) {
+      if (k in table) continue;
+      table[k] = v;
+      added.push(() => delete table[k]);
+    }
+  };
+  put(INPUT_NAMES, words.inputs);
+  put(RESULT_NAMES, words.results);
+  const options = Object.fromEntries(
+    Object.entries(words.options ?? {}).map(([k, v]) => [
+      k,
+      v.values ? { ...v, values: ownWords(v.values) } : v,
+    ]),
+  );
+  put(OPTIONS, options);
+  for (const n of words.positive ?? [])
+    if (!POSITIVE.has(n)) {
+      POSITIVE.add(n);
+      added.push(() => POSITIVE.delete(n));
+    }
+  return () => {
+    for (const undo of added.reverse()) undo();
+  };
+}
+
 export function nameInfo(name: string): NameInfo | undefined {
   return INPUT_NAMES[name] ?? RESULT_NAMES[name];
 }

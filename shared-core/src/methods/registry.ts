@@ -6,7 +6,7 @@
  */
 import type { DiagramOptions } from '../diagrams/frame';
 import type { CheckResult } from '../language/types';
-import { declareMethodWord } from '../language/vocabulary';
+import { declareMethodWord, declareMethodWords } from '../language/vocabulary';
 import { crackGrowth } from './crack-growth';
 import { damage } from './damage';
 import { stressLife } from './stress-life';
@@ -19,7 +19,12 @@ const METHODS: MethodModule[] = [stressLife, damage, crackGrowth];
 const withdraw = new Map<string, () => void>();
 function declare(m: MethodModule): void {
   withdraw.get(m.name)?.();
-  withdraw.set(m.name, declareMethodWord(m.name, m.meaning, m === METHODS[0]));
+  const undoWord = declareMethodWord(m.name, m.meaning, m === METHODS[0]);
+  const undoWords = declareMethodWords(m.words);
+  withdraw.set(m.name, () => {
+    undoWords();
+    undoWord();
+  });
 }
 for (const m of METHODS) declare(m);
 

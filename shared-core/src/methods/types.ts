@@ -8,6 +8,7 @@ import type { DiagramOptions } from '../diagrams/frame';
 import type { CheckContext } from '../language/checkContext';
 import type { RequireStatement } from '../language/statements';
 import type { CheckResult, MethodFields, RequirementResult } from '../language/types';
+import type { MethodWords } from '../language/vocabulary';
 
 /** What a method's pipeline returns beside the values it records on the context. */
 export type MethodExtras = Partial<MethodFields> & { criterion?: string };
@@ -65,6 +66,11 @@ export interface MethodModule {
   meaning: string;
   /** Its row of the table in docs/methods.md (the first cell's text): where its formulas and sources are. */
   docs: string;
+  /**
+   * Its own input, result and option names (beside the shared section, material and load
+   * words of `language/vocabulary.ts`), each with dimension and meaning.
+   */
+  words?: MethodWords;
   /** The pipeline over the check context. */
   run(ctx: CheckContext): MethodExtras;
   /** Fields of `MethodFields` the pipeline may return, in the order they appear in the JSON. */
