@@ -16,6 +16,7 @@ import {
   type MethodModule,
   methodTemplates,
   methodViews,
+  nameInfo,
   OPTIONS,
   registerMethod,
   templateSnippetOf,
@@ -29,6 +30,7 @@ const RATIO: MethodModule = {
   name: 'yield-ratio',
   meaning: 'the yield ratio Sy / Sut of the material (test only)',
   docs: 'test only',
+  words: { results: { yield_ratio: { dim: 'one', meaning: 'Sy / Sut of the material (test only)' } } },
   run(ctx) {
     const sut = ctx.si('Sut');
     const sy = ctx.si('Sy');
@@ -126,9 +128,14 @@ describe('a registered method', () => {
     expect(reg.some((e) => e.kind === 'default-option' && e.name === 'rotation')).toBe(true);
   });
 
+  it('declares its own words while registered', () => {
+    expect(nameInfo('yield_ratio')?.meaning).toBe('Sy / Sut of the material (test only)');
+  });
+
   it('is gone once unregistered', () => {
     unregister();
     expect(OPTIONS.method.values?.['yield-ratio']).toBeUndefined();
+    expect(nameInfo('yield_ratio')).toBeUndefined();
     expect(evaluateNote(NOTE).checks[0].diagnostics.some((d) => d.severity === 'error')).toBe(true);
     unregister = registerMethod(RATIO);
   });

@@ -292,11 +292,14 @@ const OPTION_TABLE: Record<string, OptionInfo> = {
   },
 };
 
-export const OPTIONS: Record<string, OptionInfo> = ownWords(
-  Object.fromEntries(
-    Object.entries(OPTION_TABLE).map(([k, v]) => [k, v.values ? { ...v, values: ownWords(v.values) } : v]),
-  ),
-);
+/** An option whose allowed words are a prototype-free table too. */
+function ownOptions(table: Record<string, OptionInfo>): Record<string, OptionInfo> {
+  return Object.fromEntries(
+    Object.entries(table).map(([k, v]) => [k, v.values ? { ...v, values: ownWords(v.values) } : v]),
+  );
+}
+
+export const OPTIONS: Record<string, OptionInfo> = ownWords(ownOptions(OPTION_TABLE));
 
 /**
  * Declares a word of `method:` (the registry of methods calls it for each method it lists,
@@ -339,13 +342,7 @@ export function declareMethodWords(words: MethodWords | undefined): () => void {
   };
   put(INPUT_NAMES, words.inputs);
   put(RESULT_NAMES, words.results);
-  const options = Object.fromEntries(
-    Object.entries(words.options ?? {}).map(([k, v]) => [
-      k,
-      v.values ? { ...v, values: ownWords(v.values) } : v,
-    ]),
-  );
-  put(OPTIONS, options);
+  put(OPTIONS, ownOptions(words.options ?? {}));
   for (const n of words.positive ?? [])
     if (!POSITIVE.has(n)) {
       POSITIVE.add(n);
