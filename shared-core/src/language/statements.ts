@@ -9,12 +9,8 @@
  */
 
 import type {
-  AssignStatement,
   BadStatement,
-  OptionStatement,
   RequireItem,
-  RequireStatement,
-  SolveStatement,
   Span,
   SpectrumStatement,
   Statement,
