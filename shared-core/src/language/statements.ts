@@ -8,13 +8,7 @@
  * `#` starts a comment; blank lines and indentation are ignored.
  */
 
-import type {
-  BadStatement,
-  RequireItem,
-  Span,
-  SpectrumStatement,
-  Statement,
-} from '../context/statements';
+import type { BadStatement, RequireItem, Span, SpectrumStatement, Statement } from '../context/statements';
 import { lineRange, type Range } from '../context/types';
 import type { SourceLine } from './markdownBlocks';
 
