@@ -7,8 +7,8 @@
  * the governing one is reported, with the shell parameter of the opening.
  */
 import { type Computed, computed, MM, type Term } from '../computed';
-import type { CheckContext } from '../language/checkContext';
-import type { Range } from '../language/types';
+import type { CheckContext } from '../context/checkContext';
+import type { Range } from '../context/types';
 import type { MaterialClass } from '../materials';
 import {
   type CutoutPoint,

@@ -4,9 +4,10 @@
  * warning and a quick fix), Morrow's sigma_f_prime and Walker's gamma estimated when the
  * chosen model needs them and the note does not state them.
  */
+
+import type { CheckContext } from '../context/checkContext';
+import type { Range } from '../context/types';
 import type { CriterionKey, LoadLine, StrengthSet } from '../criteria';
-import type { CheckContext } from '../language/checkContext';
-import type { Range } from '../language/types';
 import { defaultWalkerGamma, estimateSigmaFPrimeSteel } from '../meanstress';
 import type { EnduranceChain } from './enduranceChain';
 import type { Strengths } from './material';

@@ -3,9 +3,9 @@
  * life for a material without one), the fatigue strength fraction and the S-N line.
  */
 import { computed } from '../computed';
+import type { CheckContext } from '../context/checkContext';
 import { fatigueStrengthFraction, rotatingBeamEndurance } from '../endurance';
 import { marinCorrected } from '../endurance/marinEquation';
-import type { CheckContext } from '../language/checkContext';
 import {
   loadFactor,
   miscFactor,

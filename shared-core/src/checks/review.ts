@@ -3,9 +3,9 @@
  * describe a section with a material: the assumed material family where it changed a result,
  * and a pass that hides a finite life.
  */
-import type { CheckContext } from '../language/checkContext';
-import type { RequireStatement } from '../language/statements';
-import type { RequirementResult } from '../language/types';
+import type { CheckContext } from '../context/checkContext';
+import type { RequireStatement } from '../context/statements';
+import type { RequirementResult } from '../context/types';
 
 /** Without `material:` or `material-family:` a steel is assumed: a warning where that decided a result. */
 export function assumedFamily(ctx: CheckContext): void {

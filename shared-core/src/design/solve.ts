@@ -28,7 +28,9 @@
  * the answer, which provides every other value of the check.
  */
 import type { Term } from '../computed';
-import type { StatedInput } from '../language/checkContext';
+import type { StatedInput } from '../context/checkContext';
+import type { CheckResult, Diagnostic, QuickFix, Range, Severity, Value } from '../context/types';
+import { INPUT_NAMES, nearest, RESULT_NAMES } from '../context/vocabulary';
 import type { CheckScopeEntry } from '../language/checkScope';
 import { ExpressionError, evaluateExpression, rawFromSI, type Scope } from '../language/expressions';
 import type { BlockSource } from '../language/markdownBlocks';
@@ -38,8 +40,6 @@ import {
   type SolveStatement,
   type Statement,
 } from '../language/statements';
-import type { CheckResult, Diagnostic, QuickFix, Range, Severity, Value } from '../language/types';
-import { INPUT_NAMES, nearest, RESULT_NAMES } from '../language/vocabulary';
 import { classify, DIM_LABEL, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import { formatValue } from '../units/format';
 import type { Unit } from '../units/mathInstance';

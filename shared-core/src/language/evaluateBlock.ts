@@ -4,12 +4,14 @@
  * check becomes a diagnostic of that check. The note's loop is `note/noteLoop.ts`.
  */
 import { copyMethodFields, reviewCheck, runCheckMethod } from '../checks/runMethod';
+import { CheckContext, type StatedInput } from '../context/checkContext';
+import { type CheckResult, lineRange, range } from '../context/types';
+import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from '../context/vocabulary';
 import { findMaterial, nearestMaterialKeys } from '../materials';
 import { defaultMethod } from '../methods/registry';
 import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import type { UnitSystem } from '../units/format';
 import type { Unit } from '../units/mathInstance';
-import { CheckContext, type StatedInput } from './checkContext';
 import type { CheckScopeEntry, EvaluateOptions } from './checkScope';
 import { ExpressionError, evaluateExpression, type Quantity, rawFromSI, type Scope } from './expressions';
 import { type BlockSource, ID_PATTERN } from './markdownBlocks';
@@ -22,9 +24,7 @@ import {
   parseStatements,
   type Statement,
 } from './statements';
-import { type CheckResult, lineRange, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
-import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from './vocabulary';
 
 export function evaluateBlock(
   block: BlockSource,
@@ -68,7 +68,7 @@ export function evaluateBlock(
   try {
     checkHeader(ctx, block, seenIds);
     const scope = blockScope(raw, previous, ctx.values);
-    ctx.scope = scope;
+    ctx.evaluate = (text) => evaluateExpression(text, scope);
     for (const [name, input] of inject ?? []) {
       raw.set(name, input.q.raw);
       stated.set(name, input);

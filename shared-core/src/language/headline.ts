@@ -1,5 +1,5 @@
+import type { CheckResult, Value } from '../context/types';
 import { methodViews } from '../methods/registry';
-import type { CheckResult, Value } from './types';
 
 /** The results that headline a check in one line (summary, code lens), as its method declares them. */
 export function headlineValues(c: CheckResult): Value[] {

@@ -2,12 +2,13 @@
  * `require: n_f >= 1.5, n_y >= 1.2, N_f >= 1e6` — each item compares a value of the check
  * with a target expression of the same dimension. An infinite life meets any `>=`.
  */
+
+import type { CheckContext } from '../context/checkContext';
+import type { RequirementResult } from '../context/types';
+import { INPUT_NAMES, nearest, RESULT_NAMES } from '../context/vocabulary';
 import { classify, sameVector, vectorOf } from '../units/dimensions';
-import type { CheckContext } from './checkContext';
 import { ExpressionError, evaluateExpression, type Scope } from './expressions';
 import type { RequireStatement } from './statements';
-import type { RequirementResult } from './types';
-import { INPUT_NAMES, nearest, RESULT_NAMES } from './vocabulary';
 
 export function evaluateRequirements(
   ctx: CheckContext,

@@ -4,9 +4,10 @@
  * report, templates, assumptions register, docs tests) reads it and none names a method.
  * Adding a method is one folder under `methods/` and one line here.
  */
+
+import type { CheckResult } from '../context/types';
+import { declareMethodWord, declareMethodWords } from '../context/vocabulary';
 import type { DiagramOptions } from '../diagrams/frame';
-import type { CheckResult } from '../language/types';
-import { declareMethodWord, declareMethodWords } from '../language/vocabulary';
 import { crackGrowth } from './crack-growth';
 import { damage } from './damage';
 import { stressLife } from './stress-life';

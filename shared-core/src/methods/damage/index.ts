@@ -1,8 +1,8 @@
 // biome-ignore-all lint/suspicious/noTemplateCurlyInString: these strings are VS Code snippets (${1:...} tab stops), not templates
 /** `method: damage`: Palmgren-Miner damage of a load history or spectrum at a section. */
 import { assumedFamily } from '../../checks/review';
+import { OPTIONS } from '../../context/vocabulary';
 import { HISTOGRAM_DIAGRAM, SN_DIAGRAM } from '../../diagrams/drawers';
-import { OPTIONS } from '../../language/vocabulary';
 import { MATERIALS } from '../../materials';
 import { materialLines, sectionLines } from '../templateParts';
 import type { MethodModule } from '../types';

@@ -23,6 +23,8 @@ import { readStrengths } from '../../checks/material';
 import { type LevelBase, readSpectrumLevels, type SpectrumLevel } from '../../checks/spectrumLevels';
 import { type DamageSection, damageSection, notchEquivalent } from '../../checks/unitLoadStresses';
 import { type Computed, computed, type MethodNote, MPA } from '../../computed';
+import type { CheckContext } from '../../context/checkContext';
+import type { CheckResult, Range, Severity, SnData } from '../../context/types';
 import { type CriterionModel, criterionModel, type StrengthSet } from '../../criteria';
 import {
   cyclesToFailure,
@@ -32,8 +34,6 @@ import {
   type MinerRule,
   repeatsToFailure,
 } from '../../damage';
-import type { CheckContext } from '../../language/checkContext';
-import type { CheckResult, Range, Severity, SnData } from '../../language/types';
 import {
   HistoryCsvReader,
   type HistoryIssue,

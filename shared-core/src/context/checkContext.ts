@@ -7,7 +7,7 @@
 import type { Computed } from '../computed';
 import { DIM_LABEL, type DimKey } from '../units/dimensions';
 import { formatCycles, formatValue, type UnitSystem } from '../units/format';
-import type { Quantity, Scope } from './expressions';
+import type { Quantity } from './quantity';
 import type { AssignStatement, OptionStatement, SpectrumStatement } from './statements';
 import type { Diagnostic, QuickFix, Range, Severity, Value, ValueOrigin } from './types';
 import { nameInfo, OPTIONS } from './vocabulary';
@@ -46,8 +46,12 @@ export class CheckContext {
   /** The stated value whose replaced chain is being worked out (see `replacedBy`). */
   private replacing: string | null = null;
   spectrum: SpectrumStatement[] = [];
-  /** Names of the block and `check.name` references, for expressions a method evaluates itself (spectrum levels). */
-  scope?: Scope;
+  /**
+   * Evaluates an expression of the block (its names and `check.name` references) for a method
+   * that reads expressions itself (spectrum levels); throws an `ExpressionError`. The block
+   * language sets it (`language/evaluateBlock.ts`).
+   */
+  evaluate?: (text: string) => Quantity;
 
   constructor(
     readonly id: string | null,
