@@ -1,14 +1,18 @@
 /**
  * Markdown preview: under each ```fatigue block, a table of the check's main results, its
- * requirements and its status. The note is evaluated by the core in-process (it is pure);
- * load-history files are not read here, so a damage check driven by a history says so.
+ * requirements and its status, as the language server evaluated them for this very version
+ * of the note (the `fatigue/summary` records the panel shows, history files included).
+ * Nothing is evaluated here: until the server's results for the note's current version are
+ * at hand, each block says "evaluating…", and the preview is refreshed when they arrive.
  */
-import { type CheckResult, evaluateNote } from '@fatigue-notes/core';
+import { problemCounts, type SummaryCheck } from './summary';
 
 /** The parts of markdown-it this plugin uses (the preview passes its own instance). */
 export interface MarkdownItLike {
   core: {
-    ruler: { push(name: string, rule: (state: { src: string; tokens: Token[] }) => void): void };
+    ruler: {
+      push(name: string, rule: (state: { src: string; tokens: Token[]; env?: unknown }) => void): void;
+    };
   };
   renderer: { rules: Record<string, RenderRule | undefined> };
   utils: { escapeHtml(s: string): string };
@@ -31,47 +35,58 @@ type RenderRule = (
 
 export interface PreviewSettings {
   enabled: boolean;
-  unitSystem: 'auto' | 'SI' | 'US';
-  significantDigits: number;
-  lints?: Record<string, boolean>;
 }
 
+/** The server's results for the note being rendered, if it has them for its current version. */
+export type PreviewResults =
+  | { state: 'ready'; checks: readonly SummaryCheck[] }
+  | { state: 'evaluating' }
+  | { state: 'unavailable'; message: string };
+
 const META_KEY = 'fatigueNotesResults';
-/** The results shown under a block, by method (`D` is the damage of a damage check, a diameter elsewhere). */
-const SHOWN: Record<CheckResult['method'], string[]> = {
-  'stress-life': ['n_f', 'n_y', 'N_f', 'S_f', 'Se', 'sigma_a_eq', 'sigma_m_eq'],
-  damage: ['D', 'repeats', 'N_eq', 'n_y'],
-  'crack-growth': ['a_c', 'N_cg', 'N_insp'],
-};
-const STATUS: Record<CheckResult['status'], string> = {
+const STATUS: Record<SummaryCheck['status'], string> = {
   pass: '✓ pass',
   fail: '✗ fail',
   error: '! error',
-  unchecked: '– unchecked',
+  unchecked: '– no requirement',
 };
 
 function isFatigueFence(info: string): boolean {
   return /^fatigue(\s|$)/.test(info.trim());
 }
 
-export function fatiguePreviewPlugin(md: MarkdownItLike, settings: () => PreviewSettings): MarkdownItLike {
+/** The preview's own document (VS Code passes it as `env.currentDocument`, a Uri). */
+export function documentUriOf(env: unknown): string | undefined {
+  const doc = (env as { currentDocument?: unknown } | undefined)?.currentDocument;
+  if (doc === undefined || doc === null) return undefined;
+  const s = typeof doc === 'string' ? doc : String(doc);
+  return s && s !== '[object Object]' ? s : undefined;
+}
+
+export function fatiguePreviewPlugin(
+  md: MarkdownItLike,
+  settings: () => PreviewSettings,
+  results: (uri: string | undefined) => PreviewResults,
+): MarkdownItLike {
   // The results travel on the fence tokens themselves: VS Code parses with one `env` and
   // renders (possibly from its token cache) with another.
-  md.core.ruler.push('fatigue_notes_evaluate', (state) => {
-    const s = settings();
-    if (!s.enabled) return;
+  md.core.ruler.push('fatigue_notes_results', (state) => {
+    if (!settings().enabled) return;
     const fences = state.tokens.filter((t) => t.type === 'fence' && isFatigueFence(t.info));
     if (fences.length === 0) return;
-    const result = evaluateNote(state.src, {
-      unitSystem: s.unitSystem,
-      significantDigits: s.significantDigits,
-      ...(s.lints ? { lints: s.lints } : {}),
-    });
+    const r = results(documentUriOf(state.env));
+    const esc = md.utils.escapeHtml;
     fences.forEach((token, n) => {
-      // The n-th fatigue fence of the note is the n-th check; the opening line confirms it.
-      const line = token.map?.[0];
-      const check = result.checks.find((c) => c.range.start.line === line) ?? result.checks[n];
-      if (check) token.meta = { ...(token.meta ?? {}), [META_KEY]: renderCheck(check, md.utils.escapeHtml) };
+      let html: string;
+      if (r.state === 'ready') {
+        // The check whose block opens on this fence's line; the n-th check otherwise.
+        const line = token.map?.[0];
+        const check = r.checks.find((c) => c.range.start.line === line) ?? r.checks[n];
+        if (!check) return;
+        html = renderCheck(check, esc);
+      } else if (r.state === 'evaluating') html = renderWaiting();
+      else html = renderUnavailable(r.message, esc);
+      token.meta = { ...(token.meta ?? {}), [META_KEY]: html };
     });
   });
   const fallback: RenderRule = (tokens, idx, options, _env, self) =>
@@ -85,8 +100,16 @@ export function fatiguePreviewPlugin(md: MarkdownItLike, settings: () => Preview
   return md;
 }
 
-export function renderCheck(c: CheckResult, esc: (s: string) => string): string {
-  const rows = (SHOWN[c.method] ?? SHOWN['stress-life'])
+export function renderWaiting(): string {
+  return '<div class="fatigue-notes-result fatigue-notes-evaluating" role="status"><span class="fatigue-notes-badge">evaluating…</span> the language server is working out this check</div>';
+}
+
+export function renderUnavailable(message: string, esc: (s: string) => string): string {
+  return `<div class="fatigue-notes-result fatigue-notes-unavailable" role="status">${esc(message)}</div>`;
+}
+
+export function renderCheck(c: SummaryCheck, esc: (s: string) => string): string {
+  const rows = (c.shown?.table ?? [])
     .filter((n) => c.values[n])
     .map((n) => {
       const v = c.values[n];
@@ -95,14 +118,15 @@ export function renderCheck(c: CheckResult, esc: (s: string) => string): string 
   const reqs = c.requirements.map((r) => {
     const mark = r.met === true ? '✓' : r.met === false ? '✗' : '?';
     const cls = r.met === true ? 'met' : r.met === false ? 'not-met' : 'unknown';
-    return `<li class="fatigue-notes-req-${cls}">${mark} <code>${esc(r.text)}</code>: ${esc(r.actualDisplay)}</li>`;
+    const verdict = r.met === true ? 'met' : r.met === false ? 'not met' : 'not evaluated';
+    return `<li class="fatigue-notes-req-${cls}">${mark} <code>${esc(r.text)}</code>: ${esc(r.actualDisplay)} (${verdict})</li>`;
   });
-  const errors = c.diagnostics.filter((d) => d.severity === 'error');
-  const warnings = c.diagnostics.filter((d) => d.severity === 'warning');
+  const { errors, warnings } = problemCounts(c);
+  const first = c.diagnostics?.firstError;
   const problems =
-    errors.length + warnings.length > 0
-      ? `<p class="fatigue-notes-problems">${errors.length} error${errors.length === 1 ? '' : 's'}, ${warnings.length} warning${warnings.length === 1 ? '' : 's'}${
-          errors[0] ? `: ${esc(errors[0].message)}` : ''
+    errors + warnings > 0
+      ? `<p class="fatigue-notes-problems">${errors} error${errors === 1 ? '' : 's'}, ${warnings} warning${warnings === 1 ? '' : 's'}${
+          first ? `: ${esc(first)}` : ''
         }</p>`
       : '';
   return (

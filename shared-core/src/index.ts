@@ -35,7 +35,13 @@ export * from './diagrams';
 export type { HistoryChunkReader } from './language/checkContext';
 export { type EvaluateOptions, evaluateNote } from './language/evaluateNote';
 export { compileExpression, ExpressionError, evaluateExpression } from './language/expressions';
-export { headlineValues } from './language/headline';
+export {
+  headlineRank,
+  headlineValues,
+  SHOWN_RESULTS,
+  type ShownResults,
+  shownNames,
+} from './language/headline';
 export { type BlockSource, findFatigueBlocks, splitLines } from './language/markdownBlocks';
 export { parseLine, parseStatements, type Statement } from './language/statements';
 export * from './language/types';

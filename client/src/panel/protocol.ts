@@ -17,8 +17,8 @@ export interface PanelRow {
   criterion: string;
   n_f: Cell;
   n_y: Cell;
-  /** `N_f` for a stress-life check, `D` for damage, `N_cg` for crack growth. */
-  life: Cell & { name: string };
+  /** `N_f` for a stress-life check, `D` for damage, `N_cg` for crack growth, with its meaning. */
+  life: Cell & { name: string; meaning: string };
   status: 'pass' | 'fail' | 'error' | 'unchecked';
   /** 1-based line of the block's opening fence, for screen readers and tooltips. */
   line: number;

@@ -4,7 +4,7 @@
  */
 import * as vscode from 'vscode';
 import type { SummaryService, SummaryState } from '../summaryService';
-import { makeNonce, panelHtml } from './html';
+import { DIAGRAM_STYLE_FILE, makeNonce, panelHtml } from './html';
 import { buildPanelModel } from './model';
 import type { FromPanel, ToPanel } from './protocol';
 
@@ -15,7 +15,7 @@ export class SummaryPanel implements vscode.Disposable {
   private readonly disposables: vscode.Disposable[] = [];
   private ready = false;
 
-  static show(context: vscode.ExtensionContext, service: SummaryService, digits: () => number): SummaryPanel {
+  static show(context: vscode.ExtensionContext, service: SummaryService): SummaryPanel {
     const doc = vscode.window.activeTextEditor?.document;
     if (doc && doc.languageId === 'markdown') service.follow(doc);
     else service.refresh();
@@ -37,7 +37,7 @@ export class SummaryPanel implements vscode.Disposable {
       },
     );
     panel.iconPath = vscode.Uri.joinPath(context.extensionUri, 'media', 'icon.png');
-    SummaryPanel.current = new SummaryPanel(panel, context, service, digits);
+    SummaryPanel.current = new SummaryPanel(panel, context, service);
     return SummaryPanel.current;
   }
 
@@ -45,7 +45,6 @@ export class SummaryPanel implements vscode.Disposable {
     private readonly panel: vscode.WebviewPanel,
     context: vscode.ExtensionContext,
     private readonly service: SummaryService,
-    private readonly digits: () => number,
   ) {
     const webview = panel.webview;
     webview.html = panelHtml({
@@ -56,6 +55,9 @@ export class SummaryPanel implements vscode.Disposable {
         .toString(),
       styleUri: webview
         .asWebviewUri(vscode.Uri.joinPath(context.extensionUri, 'media', 'panel.css'))
+        .toString(),
+      diagramStyleUri: webview
+        .asWebviewUri(vscode.Uri.joinPath(context.extensionUri, 'dist', DIAGRAM_STYLE_FILE))
         .toString(),
     });
     this.disposables.push(
@@ -71,7 +73,7 @@ export class SummaryPanel implements vscode.Disposable {
 
   private post(s: SummaryState): void {
     if (!this.ready) return;
-    const model = buildPanelModel(s.document, s.checks, s.error, this.digits());
+    const model = buildPanelModel(s.document, s.checks, s.error);
     const msg: ToPanel = { type: 'model', model };
     void this.panel.webview.postMessage(msg);
     this.panel.title = s.document ? `Fatigue checks: ${s.document.fileName}` : 'Fatigue checks';

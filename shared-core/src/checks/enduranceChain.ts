@@ -201,7 +201,7 @@ export function enduranceChain(
         'Se',
         marinCorrected('Se', { ka, kb, kc, kd, ke, kmisc }, prime, 'Se_prime'),
         ['ka', 'kb', 'kc', 'kd', 'ke', 'kmisc', 'Se_prime'],
-        { range: ctx.header },
+        { range: ctx.header, tool: { basis: 'Marin equation' } },
       );
     }
   }
