@@ -14,7 +14,8 @@ import { buildCli, ROOT } from '../server/test/helpers/lspProcess';
 
 const nvim = spawnSync('nvim', ['--version'], { encoding: 'utf8' });
 const hasNvim = nvim.status === 0;
-if (!hasNvim) console.warn('neovim.test.ts: `nvim` is not installed, the Neovim client test is skipped');
+const SKIPPED = 'skipped: nvim not on PATH (apt-get install neovim)';
+if (!hasNvim) console.warn(`neovim.test.ts: Neovim as LSP client ${SKIPPED}`);
 
 const FIXTURE = join(ROOT, 'server/test/fixtures/conveyor-note.md');
 
@@ -22,7 +23,7 @@ function lua(s: string): string {
   return JSON.stringify(s); // a JSON string is a valid Lua string literal for these paths
 }
 
-describe.skipIf(!hasNvim)('Neovim as LSP client', () => {
+describe.skipIf(!hasNvim)(`Neovim as LSP client${hasNvim ? '' : ` (${SKIPPED})`}`, () => {
   let dir = '';
   let dispose = () => {};
   let output: string[] = [];

@@ -1,10 +1,10 @@
 /**
- * The summary panel's page in headless Chromium (Debian's, through playwright-core), fed
+ * The summary panel's page in headless Chromium (the npm package's, through playwright-core), fed
  * with the model built from `evaluateNote` results exactly as the extension builds it from
  * the server's summary: rows, sorting, diagrams, the messages it posts, keyboard use, the
  * empty state, the content security policy and the theme colours.
  */
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { evaluateNote } from '@fatigue-notes/core';
@@ -12,12 +12,12 @@ import { build } from 'esbuild';
 import { type Browser, chromium, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CONTRACT_BLOCK } from '../../test/fixtures/contractBlock';
+import { testBrowser } from '../../test/helpers/browser.mjs';
 import { panelHtml } from '../src/panel/html';
 import { buildPanelModel } from '../src/panel/model';
 import type { PanelModel } from '../src/panel/protocol';
 import type { SummaryCheck } from '../src/summary';
 
-const CHROMIUM = '/usr/bin/chromium';
 const ROOT = resolve(__dirname, '../..');
 const OUT = join(ROOT, 'test-output');
 
@@ -57,17 +57,7 @@ function summaryChecks(text: string): SummaryCheck[] {
   }));
 }
 
-const FLAGS = [
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-];
-
-describe.skipIf(!existsSync(CHROMIUM))('summary panel in Chromium', () => {
+describe('summary panel in Chromium', () => {
   let browser: Browser;
   let page: Page;
   let dir: string;
@@ -103,7 +93,8 @@ describe.skipIf(!existsSync(CHROMIUM))('summary panel in Chromium', () => {
       join(dir, 'panel.html'),
       panelHtml({ cspSource: 'file:', nonce, scriptUri: 'panel.js', styleUri: 'panel.css' }),
     );
-    browser = await chromium.launch({ executablePath: CHROMIUM, args: FLAGS });
+    const { executablePath, args } = await testBrowser();
+    browser = await chromium.launch({ executablePath, args });
     page = await browser.newPage({ viewport: { width: 1200, height: 900 } });
     page.on('console', (m) => {
       if (/Content Security Policy|Refused/i.test(m.text())) cspErrors.push(m.text());

@@ -1,7 +1,8 @@
 /**
  * `fatigue-notes report`: the HTML written for a note with four checks (a pass, a design-mode
  * solve against a published example, a failing requirement with defaults taken, and a check
- * without requirements), opened in headless Chromium: a screenshot and a PDF are produced
+ * without requirements), opened in headless Chromium (the npm package's, through
+ * test/helpers/browser.mjs): a screenshot and a PDF are produced
  * (test-output/report/), nothing is fetched from anywhere, and the content is asserted.
  */
 import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -11,6 +12,7 @@ import { evaluateNote } from '@fatigue-notes/core';
 import { chromium } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CONTRACT_BLOCK } from '../../test/fixtures/contractBlock';
+import { testBrowser } from '../../test/helpers/browser.mjs';
 import { defaultReportPath, runReportCommand } from '../src/cli/report';
 import { CAUTIONS } from '../src/report/reportHtml';
 
@@ -219,19 +221,11 @@ describe('report in headless Chromium', () => {
   }, async () => {
     mkdirSync(OUT_DIR, { recursive: true });
     const profile = mkdtempSync(join(tmpdir(), 'fatigue-report-chromium-'));
+    const { executablePath, args } = await testBrowser();
     const context = await chromium.launchPersistentContext(profile, {
-      executablePath: '/usr/bin/chromium',
+      executablePath,
       headless: true,
-      args: [
-        '--headless',
-        '--no-sandbox',
-        '--disable-gpu',
-        '--disable-quic',
-        '--no-first-run',
-        '--disable-background-networking',
-        '--disable-component-update',
-        '--disable-sync',
-      ],
+      args,
       viewport: { width: 1000, height: 1400 },
     });
     try {

