@@ -43,7 +43,8 @@ export type PreviewResults =
   | { state: 'evaluating' }
   | { state: 'unavailable'; message: string };
 
-const META_KEY = 'fatigueNotesResults';
+/** The fence's place among the note's fatigue fences, set when the note is parsed. */
+const INDEX_KEY = 'fatigueNotesIndex';
 const STATUS: Record<SummaryCheck['status'], string> = {
   pass: '✓ pass',
   fail: '✗ fail',
@@ -68,34 +69,39 @@ export function fatiguePreviewPlugin(
   settings: () => PreviewSettings,
   results: (uri: string | undefined) => PreviewResults,
 ): MarkdownItLike {
-  // The results travel on the fence tokens themselves: VS Code parses with one `env` and
-  // renders (possibly from its token cache) with another.
-  md.core.ruler.push('fatigue_notes_results', (state) => {
-    if (!settings().enabled) return;
-    const fences = state.tokens.filter((t) => t.type === 'fence' && isFatigueFence(t.info));
-    if (fences.length === 0) return;
-    const r = results(documentUriOf(state.env));
-    const esc = md.utils.escapeHtml;
-    fences.forEach((token, n) => {
-      let html: string;
-      if (r.state === 'ready') {
-        // The check whose block opens on this fence's line; the n-th check otherwise.
-        const line = token.map?.[0];
-        const check = r.checks.find((c) => c.range.start.line === line) ?? r.checks[n];
-        if (!check) return;
-        html = renderCheck(check, esc);
-      } else if (r.state === 'evaluating') html = renderWaiting();
-      else html = renderUnavailable(r.message, esc);
-      token.meta = { ...(token.meta ?? {}), [META_KEY]: html };
-    });
+  // VS Code parses without the document (and caches the tokens) and renders with it in
+  // `env.currentDocument`: the parse only numbers the fatigue fences, the render looks the
+  // results up, once per render.
+  md.core.ruler.push('fatigue_notes_fences', (state) => {
+    let n = 0;
+    for (const t of state.tokens)
+      if (t.type === 'fence' && isFatigueFence(t.info)) t.meta = { ...(t.meta ?? {}), [INDEX_KEY]: n++ };
   });
+  const perRender = new WeakMap<object, PreviewResults>();
+  const lookup = (env: unknown): PreviewResults => {
+    if (typeof env !== 'object' || env === null) return results(documentUriOf(env));
+    let r = perRender.get(env);
+    if (!r) {
+      r = results(documentUriOf(env));
+      perRender.set(env, r);
+    }
+    return r;
+  };
   const fallback: RenderRule = (tokens, idx, options, _env, self) =>
     (self as { renderToken(t: Token[], i: number, o: unknown): string }).renderToken(tokens, idx, options);
   const original = md.renderer.rules.fence ?? fallback;
   md.renderer.rules.fence = (tokens, idx, options, env, self) => {
     const html = original(tokens, idx, options, env, self);
-    const extra = tokens[idx].meta?.[META_KEY];
-    return typeof extra === 'string' && settings().enabled ? html + extra : html;
+    const token = tokens[idx];
+    const n = token.meta?.[INDEX_KEY];
+    if (typeof n !== 'number' || !settings().enabled) return html;
+    const r = lookup(env);
+    if (r.state === 'evaluating') return html + renderWaiting();
+    if (r.state === 'unavailable') return html + renderUnavailable(r.message, md.utils.escapeHtml);
+    // The check whose block opens on this fence's line; the n-th check otherwise.
+    const line = token.map?.[0];
+    const check = r.checks.find((c) => c.range.start.line === line) ?? r.checks[n];
+    return check ? html + renderCheck(check, md.utils.escapeHtml) : html;
   };
   return md;
 }

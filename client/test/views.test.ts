@@ -135,7 +135,8 @@ describe('status bar text', () => {
 
 /**
  * The smallest stand-in for markdown-it that exercises the plugin: fences only, parsed with
- * one env (holding the preview's document, as VS Code's does) and rendered with another.
+ * one env (without the document) and rendered with another (holding it), as VS Code's
+ * preview does.
  */
 function fakeMarkdownIt(): MarkdownItLike & { render(src: string, uri?: string): string } {
   const rules: Array<(s: { src: string; tokens: Token[]; env?: unknown }) => void> = [];
@@ -165,10 +166,11 @@ function fakeMarkdownIt(): MarkdownItLike & { render(src: string, uri?: string):
         tokens.push({ type: 'fence', info: m[1], map: [i, j + 1], meta: null });
         i = j;
       }
-      // VS Code's env holds the document as a Uri object, whose toString() is the URI.
+      // As VS Code does: the parse has no document; the render's env holds it as a Uri
+      // object, whose toString() is the URI.
+      for (const r of rules) r({ src, tokens, env: { currentDocument: undefined } });
       const env = { currentDocument: { toString: () => uri } };
-      for (const r of rules) r({ src, tokens, env });
-      return tokens.map((_, i) => md.renderer.rules.fence!(tokens, i, {}, { another: 'env' }, {})).join('\n');
+      return tokens.map((_, i) => md.renderer.rules.fence!(tokens, i, {}, env, {})).join('\n');
     },
   };
   return md;

@@ -68,6 +68,8 @@ export function listen(connection: Connection): void {
   let canWatchFolders = false;
 
   const log = (message: string) => connection.console.error(message);
+  /** When each note was opened, until its first results are published (logged: the time to first answer). */
+  const openedAt = new Map<string, number>();
 
   const documents = new NoteDocuments({
     settings: () => settings,
@@ -78,6 +80,13 @@ export function listen(connection: Connection): void {
         void connection.sendDiagnostics(publishParams(uri, version, view.result, view));
       } catch (e) {
         log(`cannot publish diagnostics of ${uri}: ${String(e)}`);
+      }
+      const t0 = openedAt.get(uri);
+      if (t0 !== undefined) {
+        openedAt.delete(uri);
+        connection.console.info(
+          `${uri.split('/').pop()}: first results published ${(performance.now() - t0).toFixed(0)} ms after it was opened`,
+        );
       }
     },
     onError: log,
@@ -174,14 +183,15 @@ export function listen(connection: Connection): void {
   });
 
   connection.onDidOpenTextDocument((p) =>
-    guard('didOpen', undefined, () =>
+    guard('didOpen', undefined, () => {
+      openedAt.set(p.textDocument.uri, performance.now());
       documents.open(
         p.textDocument.uri,
         p.textDocument.languageId,
         p.textDocument.version,
         p.textDocument.text,
-      ),
-    ),
+      );
+    }),
   );
   connection.onDidChangeTextDocument((p) =>
     guard('didChange', undefined, () =>
@@ -190,6 +200,7 @@ export function listen(connection: Connection): void {
   );
   connection.onDidCloseTextDocument((p) =>
     guard('didClose', undefined, () => {
+      openedAt.delete(p.textDocument.uri);
       if (documents.close(p.textDocument.uri))
         void connection.sendDiagnostics({ uri: p.textDocument.uri, diagnostics: [] });
     }),
