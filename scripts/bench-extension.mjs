@@ -40,7 +40,8 @@ function wall(args) {
   const t = process.hrtime.bigint();
   const r = spawnSync(process.execPath, args, { cwd: ROOT, encoding: 'utf8' });
   const ms = Number(process.hrtime.bigint() - t) / 1e6;
-  if (r.status !== 0) throw new Error(`exit ${r.status}: ${r.stderr.split('\n').slice(-12).join('\n').slice(-1500)}`);
+  if (r.status !== 0)
+    throw new Error(`exit ${r.status}: ${r.stderr.split('\n').slice(-12).join('\n').slice(-1500)}`);
   return { ms, out: r.stdout };
 }
 
@@ -68,4 +69,6 @@ const rows = [
   },
 ];
 if (json) console.log(JSON.stringify(rows));
-else for (const r of rows) console.log(`${r.figure.padEnd(52)} ${r.value.toFixed(1).padStart(7)} ms  ${r.peer ?? ''}`);
+else
+  for (const r of rows)
+    console.log(`${r.figure.padEnd(52)} ${r.value.toFixed(1).padStart(7)} ms  ${r.peer ?? ''}`);
