@@ -55,7 +55,13 @@ export async function activate(
     }),
     vscode.commands.registerCommand(SHOW_SUMMARY_COMMAND, () => SummaryPanel.show(context, service)),
     // The code lens above each block (from the language server) opens the panel.
-    vscode.commands.registerCommand('fatigueNotes.showCheck', () => SummaryPanel.show(context, service)),
+    vscode.commands.registerCommand('fatigueNotes.showCheck', (uri?: unknown, id?: unknown) =>
+      SummaryPanel.show(
+        context,
+        service,
+        typeof uri === 'string' && typeof id === 'string' ? { uri, id } : undefined,
+      ),
+    ),
     vscode.commands.registerCommand('fatigueNotes.checkWorkspace', () => workspaceCheck.run()),
     vscode.commands.registerCommand('fatigueNotes.insertCheck', () => insertCheck()),
     vscode.commands.registerCommand('fatigueNotes.exportReport', () => exportReport(serverModule)),

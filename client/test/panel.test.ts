@@ -274,6 +274,18 @@ describe('summary panel in Chromium', () => {
     expect(await page.locator('#empty').textContent()).toContain('did not answer');
   });
 
+  it('selects the check the extension names (the line above a block was clicked)', async () => {
+    await page.evaluate(
+      (mm) => window.postMessage({ type: 'model', model: mm, select: 'axle_stub' }, '*'),
+      model as unknown as object,
+    );
+    await page.waitForFunction(
+      () =>
+        document.querySelector('#rows tr[aria-selected="true"]')?.getAttribute('data-key') === 'axle_stub',
+    );
+    expect(await page.locator('#detail h2').textContent()).toContain('axle_stub');
+  });
+
   it('runs under its content security policy without a violation', () => {
     expect(cspErrors).toEqual([]);
   });

@@ -545,6 +545,21 @@ async function main() {
       check(haigh === 1 && sn === 1, `summary panel draws the Haigh and S-N diagrams (${haigh}, ${sn})`);
       await page.screenshot({ path: join(OUT, '4-summary-panel.png') });
 
+      // The line above a block (its code lens) opens the panel on that check.
+      const lens = page
+        .locator('.editor-group-container .monaco-editor .codelens-decoration a', { hasText: 'n_f 4.873' })
+        .first();
+      await lens.click({ timeout: 10_000 }).catch(() => undefined);
+      const lensSelected = await waitFor(
+        async () => {
+          const key = await panel.locator('#rows tr[aria-selected="true"]').getAttribute('data-key');
+          return key === 'bracket_bolt_hole' ? key : null;
+        },
+        'the lens to select its check in the panel',
+        15_000,
+      ).catch(() => null);
+      check(lensSelected, 'the line above bracket_bolt_hole selects that check in the panel');
+
       // A click on a row reveals its block in the editor.
       await panel.locator('#rows tr[data-key="bracket_bolt_hole"]').click();
       const revealed = await waitFor(

@@ -59,7 +59,8 @@ export interface PanelModel {
   details: PanelDetail[];
 }
 
-export type ToPanel = { type: 'model'; model: PanelModel };
+/** The model to show; `select` is the key of a row to select (the lens above a block was clicked). */
+export type ToPanel = { type: 'model'; model: PanelModel; select?: string };
 
 export type FromPanel =
   | { type: 'ready' }

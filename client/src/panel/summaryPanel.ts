@@ -14,12 +14,21 @@ export class SummaryPanel implements vscode.Disposable {
   private static current: SummaryPanel | undefined;
   private readonly disposables: vscode.Disposable[] = [];
   private ready = false;
+  /** A check to select once the note it belongs to is shown. */
+  private select: { uri: string; id: string } | undefined;
 
-  static show(context: vscode.ExtensionContext, service: SummaryService): SummaryPanel {
+  /** Opens (or reveals) the panel; `select` names a check to select (from the lens above its block). */
+  static show(
+    context: vscode.ExtensionContext,
+    service: SummaryService,
+    select?: { uri: string; id: string },
+  ): SummaryPanel {
     const doc = vscode.window.activeTextEditor?.document;
     if (doc && doc.languageId === 'markdown') service.follow(doc);
     else service.refresh();
     if (SummaryPanel.current) {
+      SummaryPanel.current.select = select;
+      SummaryPanel.current.post(service.current);
       SummaryPanel.current.panel.reveal(vscode.ViewColumn.Beside, true);
       return SummaryPanel.current;
     }
@@ -38,6 +47,7 @@ export class SummaryPanel implements vscode.Disposable {
     );
     panel.iconPath = vscode.Uri.joinPath(context.extensionUri, 'media', 'icon.png');
     SummaryPanel.current = new SummaryPanel(panel, context, service);
+    SummaryPanel.current.select = select;
     return SummaryPanel.current;
   }
 
@@ -75,6 +85,14 @@ export class SummaryPanel implements vscode.Disposable {
     if (!this.ready) return;
     const model = buildPanelModel(s.document, s.checks, s.error);
     const msg: ToPanel = { type: 'model', model };
+    if (
+      this.select &&
+      s.document?.uri.toString() === this.select.uri &&
+      model.rows.some((r) => r.key === this.select?.id)
+    ) {
+      msg.select = this.select.id;
+      this.select = undefined;
+    }
     void this.panel.webview.postMessage(msg);
     this.panel.title = s.document ? `Fatigue checks: ${s.document.fileName}` : 'Fatigue checks';
   }

@@ -349,6 +349,10 @@ window.addEventListener('message', (event: MessageEvent<ToPanel>) => {
       ?.closest?.('tr')
       ?.getAttribute('data-key');
     model = msg.model;
+    if (msg.select && model.rows.some((r) => r.key === msg.select)) {
+      state.selected = msg.select;
+      vscode.setState(state);
+    }
     render();
     // Keep the keyboard where it was across live updates.
     if (focusedKey)
