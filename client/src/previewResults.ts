@@ -19,6 +19,8 @@ export class PreviewResultStore implements vscode.Disposable {
   private readonly held = new Map<string, Held>();
   /** Notes with a request in flight (one at a time per note). */
   private readonly asking = new Set<string>();
+  /** The last request that failed, by note: the preview says so instead of waiting. */
+  private readonly failed = new Map<string, { version: number; message: string }>();
   /** Notes a preview rendered without results: refresh it when they come. */
   private readonly waiting = new Set<string>();
   /** Notes some preview has rendered: keep their results current. */
@@ -53,6 +55,7 @@ export class PreviewResultStore implements vscode.Disposable {
       vscode.workspace.onDidCloseTextDocument((d) => {
         const uri = d.uri.toString();
         this.held.delete(uri);
+        this.failed.delete(uri);
         this.previewed.delete(uri);
         this.waiting.delete(uri);
       }),
@@ -69,6 +72,8 @@ export class PreviewResultStore implements vscode.Disposable {
     this.previewed.add(uri);
     const held = this.held.get(uri);
     if (held && held.version === doc.version) return { state: 'ready', checks: held.checks };
+    const failed = this.failed.get(uri);
+    if (failed && failed.version === doc.version) return { state: 'unavailable', message: failed.message };
     this.waiting.add(uri);
     if (!this.request()) return { state: 'evaluating' }; // the server is starting: `restarted()` asks again
     this.ask(doc);
@@ -79,6 +84,7 @@ export class PreviewResultStore implements vscode.Disposable {
   restarted(): void {
     this.held.clear();
     this.asking.clear();
+    this.failed.clear();
     if (this.previewed.size > 0) this.refreshSoon();
   }
 
@@ -98,7 +104,15 @@ export class PreviewResultStore implements vscode.Disposable {
         const now = openDocument(uri);
         if (now && now.version > got && this.previewed.has(uri) && got >= version) this.ask(now);
       },
-      () => this.asking.delete(uri),
+      (e: unknown) => {
+        this.asking.delete(uri);
+        const why = e instanceof Error ? e.message : String(e);
+        this.failed.set(uri, {
+          version,
+          message: `No results from the fatigue-notes language server (${why}).`,
+        });
+        if (this.waiting.delete(uri)) this.refreshSoon();
+      },
     );
   }
 
