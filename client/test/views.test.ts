@@ -275,8 +275,7 @@ describe('check templates', () => {
         const r = evaluateNote(text);
         expect(r.checks).toHaveLength(1);
         expect(r.checks[0].id).toBe('x_1');
-        const method = c.kind === 'finite-life' ? 'stress-life' : c.kind;
-        expect(r.checks[0].method).toBe(method);
+        expect(r.checks[0].method).toBe(c.method);
         // No unknown names or options: only the `?` placeholders are errors.
         const codes = new Set(r.checks[0].diagnostics.map((d) => d.code));
         for (const bad of [

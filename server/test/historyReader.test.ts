@@ -17,6 +17,7 @@ import {
 } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { HistoryCsvReader } from '@fatigue-notes/core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { historyReader } from '../src/files/historyReader';
 
@@ -47,9 +48,10 @@ beforeAll(() => {
 afterAll(() => rmSync(base, { recursive: true, force: true }));
 
 function read(path: string, allow = true) {
-  const chunks: string[] = [];
-  const r = historyReader(note, ws, allow).read(path, (c) => chunks.push(c));
-  return { r, text: chunks.join(''), chunks };
+  const chunks: Buffer[] = [];
+  // A chunk is valid during its call only: keep a copy.
+  const r = historyReader(note, ws, allow).read(path, (c) => chunks.push(Buffer.from(c)));
+  return { r, text: Buffer.concat(chunks).toString('utf8'), chunks };
 }
 
 describe('historyReader confines reads to the workspace', () => {
@@ -127,5 +129,48 @@ describe('historyReader confines reads to the workspace', () => {
     expect(n).toBeGreaterThanOrEqual(1024);
     // The chunks are dropped as they go: far less than the file's 64 MiB (128 MiB as UTF-16).
     expect(heapMax - heap0).toBeLessThan(48 * 1024 * 1024);
+  });
+});
+
+describe('historyReader hands on bytes that the core decodes across its 64 KiB chunks (issue 16)', () => {
+  it('a CRLF, a two-byte UTF-8 character and a UTF-16 surrogate pair cut by the 64 KiB boundary read as one', () => {
+    const CHUNK = 64 * 1024;
+    // UTF-8: the header names a unit with a micro sign; a comment line pads the file so that
+    // the CR of a CRLF is the last byte of the first chunk, and the micro sign of a second
+    // comment straddles the second boundary.
+    const head = 'load_k\u00b5N\r\n';
+    const row = '1\r\n-1\r\n';
+    let text = head;
+    const pad = CHUNK - Buffer.byteLength(text) - Buffer.byteLength('#\r');
+    text += `#${'x'.repeat(pad)}\r\n`; // CR at byte CHUNK - 1, LF at byte CHUNK
+    const pad2 = 2 * CHUNK - Buffer.byteLength(text) - 2;
+    text += `#${'y'.repeat(pad2)}\u00b5\r\n`; // the micro sign's two bytes at 2 CHUNK - 1 and 2 CHUNK
+    text += row.repeat(3);
+    const bytes = Buffer.from(text, 'utf8');
+    expect(bytes[CHUNK - 1]).toBe(13);
+    expect(bytes[CHUNK]).toBe(10);
+    expect(bytes[2 * CHUNK - 1]).toBe(0xc2);
+    writeFileSync(join(ws, 'notes', 'loads', 'split8.csv'), bytes);
+    const values: number[] = [];
+    const csv = new HistoryCsvReader({ onValue: (x) => values.push(x) });
+    expect(historyReader(note, ws).read('loads/split8.csv', (c) => csv.feed(c))).toEqual({ ok: true });
+    csv.end();
+    expect(values).toEqual([1, -1, 1, -1, 1, -1]);
+    expect(csv.header).toEqual(['load_k\u00b5N']);
+    expect(csv.blankLineCount).toBe(0);
+
+    // UTF-16 LE with a mark: a surrogate pair (U+1F527) whose halves fall on either side of a boundary.
+    const units = `\uFEFFload\n#${'z'.repeat(CHUNK / 2 - 8)}\u{1F527}\n${'2\n-2\n'.repeat(2)}`;
+    const le = Buffer.alloc(units.length * 2);
+    for (let i = 0; i < units.length; i++) le.writeUInt16LE(units.charCodeAt(i), 2 * i);
+    expect(le.readUInt16LE(CHUNK - 2)).toBe(0xd83d); // the high surrogate ends the first chunk
+    writeFileSync(join(ws, 'notes', 'loads', 'split16.csv'), le);
+    const v16: number[] = [];
+    const csv16 = new HistoryCsvReader({ onValue: (x) => v16.push(x) });
+    historyReader(note, ws).read('loads/split16.csv', (c) => csv16.feed(c));
+    csv16.end();
+    expect(v16).toEqual([2, -2, 2, -2]);
+    expect(csv16.encoding).toBe('utf-16le-bom');
+    expect(csv16.issues.filter((i) => i.severity === 'error')).toEqual([]);
   });
 });

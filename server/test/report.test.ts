@@ -33,6 +33,7 @@ Sy = 80 ksi
 Se = 30 ksi
 Kf = 2.2
 Kfs = 1.8
+rotation: non-rotating
 M_a = 600 lbf*in
 M_m = 500 lbf*in
 T_a = 400 lbf*in

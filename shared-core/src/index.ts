@@ -33,20 +33,37 @@ export {
 export * from './design';
 export * from './diagrams';
 export type { HistoryChunkReader } from './language/checkContext';
-export { type EvaluateOptions, evaluateNote } from './language/evaluateNote';
+export type { EvaluateOptions } from './language/checkScope';
 export { compileExpression, ExpressionError, evaluateExpression } from './language/expressions';
-export {
-  headlineRank,
-  headlineValues,
-  SHOWN_RESULTS,
-  type ShownResults,
-  shownNames,
-} from './language/headline';
+export { headlineRank, headlineValues, shownNames } from './language/headline';
 export { type BlockSource, findFatigueBlocks, splitLines } from './language/markdownBlocks';
 export { parseLine, parseStatements, type Statement } from './language/statements';
 export * from './language/types';
 export { editDistance, INPUT_NAMES, nameInfo, nearest, OPTIONS, RESULT_NAMES } from './language/vocabulary';
 export { findMaterial, MATERIALS } from './materials';
+export { type CrackGrowthMarks, crackGrowthDiagram } from './methods/crack-growth/diagram';
+export {
+  type CheckDiagram,
+  checkDiagrams,
+  defaultMethod,
+  methodModule,
+  methods,
+  methodTemplates,
+  methodViews,
+  registerMethod,
+  templateSnippetOf,
+} from './methods/registry';
+export { TEMPLATE_UNITS } from './methods/templateParts';
+export type {
+  DiagramSource,
+  MethodDiagram,
+  MethodExtras,
+  MethodHeadline,
+  MethodModule,
+  MethodTemplate,
+  TemplateUnits,
+} from './methods/types';
+export { evaluateNote } from './note/evaluateNote';
 export {
   type HistogramBin,
   type HistogramLimits,

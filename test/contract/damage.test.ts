@@ -151,8 +151,10 @@ describe('damage of a spectrum, Miner sums checked by hand', () => {
       'spectrum: M_max = 500 N*m, M_min = -300 N*m, n = 800',
     ]);
     const s = (M: number) => (1.5 * 32 * M) / (Math.PI * d ** 3) / MPA;
-    // The second level: amplitude (500 + 300)/2 = 400, mean (500 - 300)/2 = 100.
-    const D = 5000 / life(goodman(s(400), s(150))) + 800 / life(goodman(s(400), s(100)));
+    // The shaft rotates (the default): each level's largest moment |M_m| + |M_a| is fully
+    // reversed at every fibre (Shigley 10th ed., Sec. 6-14, Ex. 7-1). The second level:
+    // amplitude (500 + 300)/2 = 400, mean (500 - 300)/2 = 100, largest moment 500.
+    const D = 5000 / life(goodman(s(550), 0)) + 800 / life(goodman(s(500), 0));
     expect(rel(si(c, 'D'), D)).toBeLessThan(1e-9);
     expectAllFinite(c);
   });
@@ -243,10 +245,14 @@ describe('damage of a history: the ASTM E1049 example as a logger file', () => {
       ],
       fakeReader({ 'loads/fig6.csv': FIG6_CSV }),
     );
+    // The shaft rotates (the default): each counted cycle's largest moment is fully reversed
+    // at every fibre (Shigley 10th ed., Sec. 6-14, Ex. 7-1), with the rotating-history warning.
     let D = 0;
-    for (const [range, mean, count] of ASTM_FIG6_CYCLES) D += count / life(goodman(25 * range, 50 * mean));
+    for (const [range, mean, count] of ASTM_FIG6_CYCLES)
+      D += count / life(goodman(25 * range + 50 * Math.abs(mean), 0));
     expect(rel(si(c, 'D'), D)).toBeLessThan(1e-9);
     expect(rel(si(c, 'sigma_unit'), 50 * MPA)).toBeLessThan(1e-12);
+    expect(c.diagnostics.map((x) => x.code)).toContain('rotating-history');
   });
 
   it('a gate of 3.5 units drops the opening rise -2 -> 1 (range 3): 8 turning points, 3.5 cycles (gate rule of the turning-point detector, common practice, no source; (points - 1) / 2 cycles, ASTM E1049-85 (2017) 5.4.4)', () => {

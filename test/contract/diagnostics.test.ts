@@ -49,9 +49,8 @@ describe('diagnostics of a note with mistakes', () => {
       lines.findIndex((l) => l.trim() === '```fatigue'),
       'warning',
     ));
-  it('Sy above Sut', () => has('sy-above-sut', lineOf('Sy = 700 MPa'), 'warning'));
   it('defaulted temperature and reliability are flagged as assumptions', () => {
-    const fence = lineOf('```fatigue', lineOf('Sy = 700 MPa') - 3);
+    const fence = lineOf('```fatigue', lineOf('Sy = 450 MPa') - 3);
     has('defaulted-temperature', fence, 'warning');
     has('defaulted-reliability', fence, 'warning');
     has('no-criterion', fence, 'warning');
@@ -68,8 +67,25 @@ describe('diagnostics of a note with mistakes', () => {
         expect(d.range.start.character).toBeGreaterThanOrEqual(0);
       }
   });
+  it('strengths without a family: the assumed steel is a warning on the Sut line, with the family as a fix', () => {
+    const d = has('assumed-steel', lineOf('Sut = 600 MPa'), 'warning');
+    expect(d.message).toContain('endurance limit');
+    expect(d.fixes?.[0].edits[0].newText).toBe('material-family: steel\n');
+    expect(d.fixes?.map((f) => f.edits[0].newText.trim())).toContain('material-family: aluminium-wrought');
+  });
+  it('a pass with n_f below 1 and no requirement on life: warning on the require line, the fix adds N_f', () => {
+    const line = lineOf('require: n_y >= 0.85');
+    const d = has('hidden-finite-life', line, 'warning');
+    expect(d.message).toContain('finite life');
+    const edit = d.fixes?.[0].edits[0];
+    expect(edit?.newText).toBe(', N_f >= 1e6');
+    expect(edit?.range.start).toEqual({ line, character: lines[line].length });
+    const pin = result.checks.find((c) => c.id === 'pin_finite_life');
+    expect(pin?.status).toBe('pass');
+    expect(pin?.values.n_f.si).toBeLessThan(1);
+  });
   it('statuses: errors make a check an error; warnings alone do not', () => {
-    expect(result.checks.map((c) => c.status)).toEqual(['error', 'pass', 'error']);
+    expect(result.checks.map((c) => c.status)).toEqual(['error', 'pass', 'error', 'pass']);
   });
 });
 
@@ -113,6 +129,37 @@ describe('misread inputs withhold every result (test/fixtures/withheld.md)', () 
     const torque = misspelt.diagnostics.find((d) => d.range.start.line === 26);
     expect(torque?.message).toContain('N*m');
   });
+  // Values no engineering part can have are errors that withhold every result, as a wrong unit does.
+  const withheld = (id: string, code: string, prefix: string) => {
+    const c = r.checks.find((x) => x.id === id);
+    expect(c, id).toBeDefined();
+    const line = t.split('\n').findIndex((l, k) => k > c!.range.start.line && l.startsWith(prefix));
+    const d = c!.diagnostics.find((x) => x.code === code);
+    expect(d?.severity, `${id}: ${c!.diagnostics.map((x) => x.code).join(' ')}`).toBe('error');
+    expect(d?.range.start.line).toBe(line);
+    expect(c!.values.n_f).toBeUndefined();
+    expect(c!.status).toBe('error');
+    expect(c!.requirements.every((q) => q.met === null)).toBe(true);
+    expect(c!.diagnostics.some((x) => x.code === 'results-withheld')).toBe(true);
+    return d!;
+  };
+  it('Sut = 63000 MPa is beyond any metal: error, no results', () =>
+    withheld('impossible_strength', 'absurd-value', 'Sut = 63000 MPa'));
+  it('a 45 m shaft: error, no results', () => withheld('giant_shaft', 'absurd-value', 'd = 45 m'));
+  it('yield above ultimate: error, no results', () =>
+    withheld('yield_above_ultimate', 'sy-above-sut', 'Sy = 700 MPa'));
+  it('a notch radius larger than the part: error, no results', () =>
+    withheld('notch_larger_than_part', 'absurd-value', 'r = 50 mm'));
+  it('an unknown library key: error with the nearest keys, no results (a stated Sut does not stand in)', () => {
+    const d = withheld('unknown_key', 'unknown-material', 'material: aisi-1045-colddrawn');
+    expect(d.fixes?.[0].edits[0].newText).toBe('aisi-1045-cd');
+  });
+  it('a family that contradicts the library key: error, with the library family as the fix', () => {
+    const d = withheld('family_conflict', 'family-conflict', 'material-family: steel');
+    expect(d.fixes?.[0].edits[0].newText).toBe('aluminium-wrought');
+  });
+  it('Se stated for a family without an endurance limit: error, no infinite life', () =>
+    withheld('aluminium_with_endurance_limit', 'endurance-limit-stated', 'Se = 90 MPa'));
   it('a helper name one edit from a reserved input is flagged, with a rename fix', () => {
     const d = misspelt.diagnostics.find((x) => x.code === 'near-reserved-name');
     expect(d?.range.start.line).toBe(24);

@@ -89,7 +89,9 @@ describe("Budynas, Shigley's MED 8th ed., Solutions Manual, Problem 7-1: shaft d
   // Given: Kf = 2.2, Kfs = 1.8, Ma = 600, Ta = 400, Mm = 500, Tm = 300 lbf*in, Se = 30 kpsi,
   // Sut = 100 kpsi, Sy = 80 kpsi, n = 2. Published answers (Eqs. 7-8, 7-10, 7-12, 7-14, rounded
   // to 0.001 in): DE-Gerber 1.016 in, DE-elliptic 1.012 in, DE-Soderberg 1.090 in, DE-Goodman 1.073 in.
+  // The mean moment is a mean stress at the fibre: the section does not rotate under it.
   const base = [
+    'rotation: non-rotating',
     'Sut = 100 ksi',
     'Sy = 80 ksi',
     'Se = 30 ksi',

@@ -9,7 +9,10 @@ describe("Budynas, Shigley's MED 8th ed. Solutions Manual, Problem 7-1 (DE crite
   // Given: Kf = 2.2, Kfs = 1.8, Ma = 600, Ta = 400, Mm = 500, Tm = 300 lbf*in, Se = 30 kpsi,
   // Sut = 100 kpsi, Sy = 80 kpsi; the published diameters give n = 2 with each criterion:
   // DE-Gerber 1.016 in, DE-elliptic 1.012 in, DE-Soderberg 1.090 in, DE-Goodman 1.073 in.
+  // The problem's mean moment is a mean stress at the fibre, so the section does not rotate
+  // under it (on a rotating shaft the moment would be fully reversed).
   const base = (d: string) => [
+    'rotation: non-rotating',
     'Sut = 100 ksi',
     'Sy = 80 ksi',
     'Se = 30 ksi',

@@ -379,7 +379,7 @@ async function main() {
       let firstInlineAt = 0;
       const errors = await waitFor(
         async () => {
-          if (!firstInlineAt && /n_f 0\.646/.test(await linesText())) firstInlineAt = Date.now();
+          if (!firstInlineAt && /n_f 0\.7119/.test(await linesText())) firstInlineAt = Date.now();
           return (await editor.locator('.squiggly-error').count()) || 0;
         },
         'error underlines in the note with mistakes',
@@ -388,7 +388,7 @@ async function main() {
       );
       const firstDiagnosticsAt = Date.now();
       if (!firstInlineAt)
-        await waitFor(async () => /n_f 0\.646/.test(await linesText()), 'first inline results', 30_000, 20)
+        await waitFor(async () => /n_f 0\.7119/.test(await linesText()), 'first inline results', 30_000, 20)
           .then(() => {
             firstInlineAt = Date.now();
           })
@@ -430,20 +430,20 @@ async function main() {
       const mistakesText = await waitFor(
         async () => {
           const t = await linesText();
-          return /n_f 0\.646/.test(t) ? t : null;
+          return /n_f 0\.7119/.test(t) ? t : null;
         },
         'the inline results of overloaded_pin',
         30_000,
       ).catch(async () => linesText());
       check(
-        /n_f 0\.646/.test(mistakesText),
-        'inline result `n_f 0.646` beside `criterion:` of the failing check',
+        /n_f 0\.7119/.test(mistakesText),
+        'inline result `n_f 0.7119` beside `criterion:` of the failing check',
       );
-      check(/✗ 0\.646/.test(mistakesText), 'inline verdict `✗ 0.646` beside its requirement');
+      check(/✗ 0\.7119/.test(mistakesText), 'inline verdict `✗ 0.7119` beside its requirement');
       // biome-ignore lint/performance/useDomNodeTextContent: the rendered text is what the engineer sees
       const statusText = await page.locator('.statusbar').innerText();
       check(
-        /lowest safety factor 0\.646/.test(statusText),
+        /lowest safety factor 0\.7119/.test(statusText),
         `status bar shows the smallest safety factor (${statusText.match(/lowest safety factor [\d.]+/)?.[0] ?? 'absent'})`,
       );
       await page.screenshot({ path: join(OUT, '1-note-with-mistakes.png') });
@@ -579,7 +579,7 @@ async function main() {
       await page.locator('.editor-group-container .monaco-editor .view-lines').first().click();
       await page.keyboard.press('Control+G');
       await page.waitForSelector('.quick-input-widget input', { state: 'visible' });
-      await page.keyboard.type('15:12'); // the quick input opens with ':' already typed
+      await page.keyboard.type('16:12'); // the quick input opens with ':' already typed
       await page.keyboard.press('Enter');
       await page.waitForTimeout(1500); // let the editor settle: the measurement starts from a quiet state
       await page.keyboard.type('0');

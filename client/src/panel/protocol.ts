@@ -17,7 +17,7 @@ export interface PanelRow {
   criterion: string;
   n_f: Cell;
   n_y: Cell;
-  /** `N_f` for a stress-life check, `D` for damage, `N_cg` for crack growth, with its meaning. */
+  /** The first of the method's life names the check has (the server's `shown.life`), with its meaning. */
   life: Cell & { name: string; meaning: string };
   status: 'pass' | 'fail' | 'error' | 'unchecked';
   /** 1-based line of the block's opening fence, for screen readers and tooltips. */

@@ -8,6 +8,7 @@ import { join, relative, resolve } from 'node:path';
 import { evaluateNote, headlineValues, type NoteResult } from '@fatigue-notes/core';
 import { decodeNote } from '../files/decode';
 import { historyReader, workspaceOf } from '../files/historyReader';
+import { cliHistoryOptions, type HistoryLimits } from './historyLimits';
 import type { Io } from './io';
 import { type FileReport, toJson, toSarif } from './output';
 import { VERSION } from './version';
@@ -35,9 +36,9 @@ export function collectMarkdown(path: string, out: string[]): void {
   }
 }
 
-export function evaluateFile(path: string): NoteResult {
+export function evaluateFile(path: string, limits?: HistoryLimits): NoteResult {
   const text = decodeNote(readFileSync(path));
-  return evaluateNote(text, { histories: historyReader(resolve(path), workspaceOf(path)) });
+  return evaluateNote(text, cliHistoryOptions(historyReader(resolve(path), workspaceOf(path)), limits));
 }
 
 function summaryLine(rel: string, r: NoteResult['checks'][number]): string {
@@ -83,7 +84,7 @@ export async function runCheckCommand(args: string[], io: Io): Promise<number> {
   for (const f of files) {
     let result: NoteResult;
     try {
-      result = evaluateFile(f);
+      result = evaluateFile(f, io.historyLimits);
     } catch (e) {
       io.stderr(`fatigue-notes check: cannot read ${f}: ${(e as Error).message}\n`);
       return 2;

@@ -22,6 +22,7 @@ import {
 } from '@fatigue-notes/core';
 import { decodeNote } from '../files/decode';
 import { historyReader, workspaceOf } from '../files/historyReader';
+import { cliHistoryOptions } from './historyLimits';
 import type { Io } from './io';
 
 const USAGE = 'usage: fatigue-notes compare OLD.md NEW.md [--format text|json]   (either may be REV:path)\n';
@@ -74,7 +75,7 @@ export function readVersion(spec: string, cwd: string): Version {
 }
 
 function evaluate(v: Version): NoteResult {
-  return evaluateNote(v.text, { histories: historyReader(v.notePath, workspaceOf(v.notePath)) });
+  return evaluateNote(v.text, cliHistoryOptions(historyReader(v.notePath, workspaceOf(v.notePath))));
 }
 
 function valueLine(v: ValueChange): string {

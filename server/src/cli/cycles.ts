@@ -14,10 +14,13 @@
  *   range-mean bins instead of the cycles.
  *
  * Exit codes: 0 counted, no error; 1 data errors: a missing column (the available columns
- * are listed), fewer than three points, or rows whose value is not a number (each reported
- * on stderr with its line; those rows are skipped and the rest is still counted and
- * printed, so that one bad row does not hide the result but does fail a CI job);
- * 2 usage error or unreadable file.
+ * are listed), fewer than three points, values so far apart that their range overflows
+ * (about 1.8e308: counting stops at that line), or rows whose value is not a finite number (a word,
+ * `nan`, `inf`, `1e309`: each reported on stderr with its line; those rows are skipped and
+ * the rest is still counted and printed, so that one bad row does not hide the rest, but
+ * the count is incomplete, a lost sample may be the largest load, and the exit code fails
+ * a CI job), or a history past the command line's budget (`historyLimits.ts`: 120 s of
+ * reading, 1 GiB; `history-time-budget`, `history-too-large`); 2 usage error or unreadable file.
  */
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
@@ -31,6 +34,7 @@ import {
   type RainflowResult,
   RainflowHistogram as RangeMeanHistogram,
 } from '@fatigue-notes/core';
+import { CLI_HISTORY_LIMITS, type HistoryLimits } from './historyLimits';
 import type { Io } from './io';
 
 const USAGE =
@@ -129,16 +133,55 @@ class Output {
 
 class ReadFailure extends Error {}
 
-/** Streams the file through the reader; stops early when the reader gives up. */
+/** The command line's budget for the history (`historyLimits.ts`): time over all passes, bytes per pass. */
+class Budget {
+  private readonly t0: number;
+  exceeded?: HistoryIssue;
+  constructor(
+    private readonly file: string,
+    private readonly limits: HistoryLimits,
+    private readonly clock: () => number,
+  ) {
+    this.t0 = clock();
+  }
+  /** False (and `exceeded` set) when a pass that has read `bytes` so far must stop. */
+  allows(bytes: number): boolean {
+    if (this.exceeded) return false;
+    if (bytes > this.limits.bytes) this.exceeded = this.tooLarge();
+    else if (this.clock() - this.t0 > this.limits.ms)
+      this.exceeded = {
+        line: 0,
+        code: 'history-time-budget',
+        severity: 'error',
+        message: `Reading ${this.file} took more than ${(this.limits.ms / 1000).toFixed(1)} s, the command line's budget for a history: counting stopped there and the count is incomplete (split the file into parts and count each).`,
+      };
+    return this.exceeded === undefined;
+  }
+  tooLarge(): HistoryIssue {
+    return {
+      line: 0,
+      code: 'history-too-large',
+      severity: 'error',
+      message: `${this.file} is larger than ${Number((this.limits.bytes / 1048576).toPrecision(4))} MiB, the command line's budget for a history file: it is not counted whole (split it into parts and count each).`,
+    };
+  }
+}
+
+/** Streams the file through the reader; stops early when the reader gives up or the budget is spent. */
 async function feedFile(
   path: string,
   reader: HistoryCsvReader,
+  budget: Budget,
   backpressure?: { out: Output; drain?: () => Promise<void> },
 ): Promise<void> {
-  const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: CHUNK });
+  // Bytes, not text: the reader decodes them (UTF-8, UTF-16 with or without a byte-order mark).
+  const stream = createReadStream(path, { highWaterMark: CHUNK });
+  let bytes = 0;
   try {
     for await (const chunk of stream) {
-      reader.feed(chunk as string);
+      bytes += (chunk as Buffer).length;
+      if (!budget.allows(bytes)) break;
+      reader.feed(chunk as Buffer);
       if (reader.fatal) break;
       // A slow consumer of the output (a pipe) must not make the output pile up in memory.
       if (backpressure?.out.full && backpressure.drain) {
@@ -151,7 +194,7 @@ async function feedFile(
   } finally {
     stream.destroy();
   }
-  reader.end();
+  if (!budget.exceeded) reader.end();
 }
 
 /** Shortest readable form of a number for the text table (6 significant digits). */
@@ -177,11 +220,20 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
   }
   const { file, column, format, gate, bins } = parsed;
   const path = resolve(io.cwd, file);
+  const budget = new Budget(
+    file,
+    io.historyLimits ?? CLI_HISTORY_LIMITS,
+    io.clock ?? (() => performance.now()),
+  );
   try {
     const st = await stat(path);
     if (!st.isFile()) {
       io.stderr(`fatigue-notes cycles: ${file} is not a file\n`);
       return 2;
+    }
+    if (!budget.allows(st.size)) {
+      io.stderr(issueLine(file, budget.exceeded as HistoryIssue));
+      return 1;
     }
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
@@ -204,8 +256,14 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
           if (x > hi) hi = x;
         },
       });
-      await feedFile(path, scan);
-      if (!scan.fatal && lo <= hi) histogram = new RangeMeanHistogram(histogramLimitsFor(lo, hi, bins));
+      await feedFile(path, scan, budget);
+      if (budget.exceeded) {
+        io.stderr(issueLine(file, budget.exceeded));
+        return 1;
+      }
+      // (A spread that overflows gets no histogram: the count below stops with an error.)
+      if (!scan.fatal && lo <= hi && hi - lo <= Number.MAX_VALUE)
+        histogram = new RangeMeanHistogram(histogramLimitsFor(lo, hi, bins));
     }
 
     const out = new Output(io.stdout);
@@ -236,10 +294,18 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
       rows++;
     };
     const counter = new RainflowCounter({ gate, onCycle });
-    reader = new HistoryCsvReader({ column, onValue: (x) => counter.push(x) });
-    await feedFile(path, reader, { out, drain: io.drain });
+    // The line of the first sample the counter refused (it stops on a spread that overflows).
+    let stopLine = 0;
+    reader = new HistoryCsvReader({
+      column,
+      onValue: (x, line) => {
+        if (!counter.push(x) && stopLine === 0) stopLine = line;
+      },
+    });
+    await feedFile(path, reader, budget, { out, drain: io.drain });
 
     const issues = [...reader.issues];
+    if (budget.exceeded) issues.push(budget.exceeded);
     if (reader.fatal) {
       for (const i of issues) if (i.severity !== 'information') io.stderr(issueLine(file, i));
       return 1;
@@ -248,7 +314,7 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
     for (const n of result.notes) {
       if (!issues.some((i) => i.code === n.code)) {
         issues.push({
-          line: 0,
+          line: n.code === 'history-overflow' ? stopLine : 0,
           code: n.code,
           message: n.message,
           severity: n.severity === 'error' ? 'error' : 'warning',
@@ -336,6 +402,8 @@ function writeTextTail(
       `largest range ${fmt(r.maxRange)}; min ${fmt(r.min)}, max ${fmt(r.max)}.\n`,
   );
   if (reader.badRowCount > 0)
-    out.put(`${plural(reader.badRowCount, 'row')} without a number skipped (see stderr).\n`);
+    out.put(
+      `${plural(reader.badRowCount, 'row')} without a finite number skipped (see stderr): the count is incomplete.\n`,
+    );
   if (reader.blankLineCount > 0) out.put(`${plural(reader.blankLineCount, 'blank line')} skipped.\n`);
 }

@@ -14,6 +14,7 @@ import { assumptionsRegister, evaluateNote, type NoteResult } from '@fatigue-not
 import { decodeNote } from '../files/decode';
 import { historyReader, workspaceOf } from '../files/historyReader';
 import { buildReportHtml } from '../report/reportHtml';
+import { cliHistoryOptions } from './historyLimits';
 import type { Io } from './io';
 import { VERSION } from './version';
 
@@ -74,9 +75,10 @@ export async function runReportCommand(args: string[], io: Io): Promise<number> 
     io.stderr(`fatigue-notes report: cannot read ${note}: ${(e as Error).message}\n`);
     return 2;
   }
-  const result: NoteResult = evaluateNote(text, {
-    histories: historyReader(notePath, workspaceOf(notePath)),
-  });
+  const result: NoteResult = evaluateNote(
+    text,
+    cliHistoryOptions(historyReader(notePath, workspaceOf(notePath)), io.historyLimits),
+  );
   const html = buildReportHtml({
     // Inside the working folder the path helps the reader find the note; outside it, the name.
     noteName: relative(io.cwd, notePath).startsWith('..')

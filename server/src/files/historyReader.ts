@@ -1,13 +1,12 @@
 /**
  * Reads history files for `method: damage` on behalf of the core: only files inside the
- * workspace, links resolved before the check, read in 64 KiB chunks so that memory does not
- * grow with the file. Only regular files are read: a directory, a FIFO or a device is
+ * workspace, links resolved before the check, read in 64 KiB chunks of bytes so that memory
+ * does not grow with the file (one buffer, reused: a chunk is valid during its call only). Only regular files are read: a directory, a FIFO or a device is
  * refused, and the file is opened without blocking and checked again once open, so that a
  * FIFO put in its place between the check and the open cannot hang the server.
  */
 import { closeSync, constants, fstatSync, openSync, readSync, realpathSync, statSync } from 'node:fs';
 import { dirname, isAbsolute, relative, resolve, sep } from 'node:path';
-import { StringDecoder } from 'node:string_decoder';
 import type { HistoryChunkReader } from '@fatigue-notes/core';
 
 export function isInside(root: string, target: string): boolean {
@@ -68,15 +67,14 @@ export function historyReader(notePath: string, workspaceRoot: string, allowRead
       }
       try {
         if (!fstatSync(fd).isFile()) return notAFile(relativePath);
+        // The bytes as they are: the core's history reader decodes them (UTF-8, UTF-16 with
+        // or without a byte-order mark), across chunk boundaries.
         const buf = Buffer.allocUnsafe(64 * 1024);
-        const decoder = new StringDecoder('utf8');
         for (;;) {
           const n = readSync(fd, buf, 0, buf.length, null);
           if (n === 0) break;
-          onChunk(decoder.write(buf.subarray(0, n)));
+          onChunk(buf.subarray(0, n));
         }
-        const tail = decoder.end();
-        if (tail) onChunk(tail);
       } finally {
         closeSync(fd);
       }

@@ -11,6 +11,7 @@ import {
   formatNumber,
   INPUT_NAMES,
   MATERIALS,
+  methods,
   nameInfo,
   OPTIONS,
   type Position,
@@ -221,73 +222,16 @@ function materials(range: Range): CompletionItem[] {
   });
 }
 
-/** Snippet bodies write a tab stop as `@{n:text}` or `@{n|a,b|}` (turned into `${...}` when sent). */
-const SNIPPETS: Array<{ label: string; method: string; body: string[] }> = [
-  {
-    label: 'fatigue check: stress-life',
-    method: 'stress-life',
-    body: [
-      '```fatigue @{1:check_id}',
-      'title: @{2:what is checked}',
-      'material: @{3|' + MATERIALS.map((m) => m.key).join(',') + '|}',
-      'surface: @{4|' + Object.keys(OPTIONS.surface.values ?? {}).join(',') + '|}',
-      'd = @{5:diameter} mm',
-      'M_max = @{6:largest moment} N*m',
-      'M_min = @{7:smallest moment} N*m',
-      'criterion: @{8|goodman,gerber,soderberg,asme-elliptic|}',
-      'require: n_f >= @{9:required factor}, n_y >= @{10:required factor}',
-      '```',
-      '$0',
-    ],
-  },
-  {
-    label: 'fatigue check: damage (spectrum)',
-    method: 'damage',
-    body: [
-      '```fatigue @{1:check_id}',
-      'title: @{2:what is checked}',
-      'method: damage',
-      'material: @{3|' + MATERIALS.map((m) => m.key).join(',') + '|}',
-      'surface: @{4|' + Object.keys(OPTIONS.surface.values ?? {}).join(',') + '|}',
-      'd = @{5:diameter} mm',
-      'spectrum: M_a = @{6:amplitude} N*m, M_m = @{7:mean} N*m, n = @{8:cycles}',
-      'miner: @{9|original,elementary,haibach|}',
-      'criterion: @{10|goodman,gerber,soderberg,asme-elliptic|}',
-      'require: D <= @{11:allowed damage}',
-      '```',
-      '$0',
-    ],
-  },
-  {
-    label: 'fatigue check: crack growth',
-    method: 'crack-growth',
-    body: [
-      '```fatigue @{1:check_id}',
-      'title: @{2:what is checked}',
-      'method: crack-growth',
-      'C_paris = @{3:Paris coefficient}',
-      'm_paris = @{4:Paris exponent}',
-      'Y = @{5:geometry factor}',
-      'a_i = @{6:initial crack} mm',
-      'K_IC = @{7:fracture toughness} MPa*m^0.5',
-      'sigma_max = @{8:largest stress} MPa',
-      'sigma_min = @{9:smallest stress} MPa',
-      'require: N_cg >= @{10:required cycles}',
-      '```',
-      '$0',
-    ],
-  },
-];
-
 function snippets(pos: Position, prefix: string): CompletionItem[] {
   const partial = /[`~]*[A-Za-z-]*$/.exec(prefix)?.[0] ?? '';
   const range: Range = { start: { line: pos.line, character: pos.character - partial.length }, end: pos };
-  return SNIPPETS.map((s) => ({
-    label: s.label,
-    filterText: '```fatigue ' + s.method,
+  // One snippet per registered method, as the method declares it.
+  return methods().map((m) => ({
+    label: m.snippet.label,
+    filterText: '```fatigue ' + m.name,
     kind: CompletionItemKind.Snippet,
-    detail: `new \`method: ${s.method}\` check (replace the placeholders)`,
+    detail: `new \`method: ${m.name}\` check (replace the placeholders)`,
     insertTextFormat: InsertTextFormat.Snippet,
-    textEdit: { range, newText: s.body.join('\n').replace(/@\{/g, '$' + '{') },
+    textEdit: { range, newText: m.snippet.body().join('\n') },
   }));
 }

@@ -27,7 +27,7 @@ const MAX_PENDING_CHANGES = 200;
 export const LARGE_NOTE_CHARS = 256 * 1024;
 /** Largest note parsed on the main thread when the parse worker failed on it. */
 const MAIN_THREAD_PARSE_CHARS = 2 * 1024 * 1024;
-/** Milliseconds a check may read history files while the engineer types (the command line has no limit). */
+/** Milliseconds a check may read history files while the engineer types (the command line has its own budget, cli/historyLimits.ts). */
 export const HISTORY_BUDGET_MS = 3000;
 
 interface OpenNote {
@@ -71,6 +71,9 @@ export class NoteDocuments {
   }
 
   open(uri: string, languageId: string, version: number, text: string): void {
+    // (The server checks a notification's params first; this keeps the state whole if not.)
+    if (typeof text !== 'string' || typeof uri !== 'string')
+      throw new TypeError('open needs a uri and a text');
     this.close(uri);
     const doc = TextDocument.create(uri, languageId, version, text);
     const note: OpenNote = {
@@ -170,8 +173,23 @@ export class NoteDocuments {
     if (note.timer) clearTimeout(note.timer);
     note.timer = setTimeout(() => {
       note.timer = undefined;
-      this.startJob(uri, note);
+      // A timer has no caller to catch for it: a failure is logged and the note starts over.
+      try {
+        this.startJob(uri, note);
+      } catch (e) {
+        this.failed(uri, note, e);
+      }
     }, delay);
+  }
+
+  private failed(uri: string, note: OpenNote, e: unknown): void {
+    this.host.onError(`evaluation of ${uri} failed: ${e instanceof Error ? e.stack : String(e)}`);
+    note.job = undefined;
+    note.parse = undefined;
+    note.session = this.newSession(uri);
+    note.pending = [];
+    note.pendingOverflow = false;
+    note.evaluatedVersion = -1;
   }
 
   private startJob(uri: string, note: OpenNote): void {
@@ -190,8 +208,12 @@ export class NoteDocuments {
           if (!current()) return;
           note.parse = undefined;
           // Skipped: a newer text of this note is being parsed and will be evaluated.
-          if (blocks)
-            this.runJob(uri, note, note.session.start(text, changes, blocks), version, pendingCount);
+          try {
+            if (blocks)
+              this.runJob(uri, note, note.session.start(text, changes, blocks), version, pendingCount);
+          } catch (e) {
+            this.failed(uri, note, e);
+          }
         },
         (e: Error) => {
           if (!current()) return;

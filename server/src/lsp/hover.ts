@@ -118,6 +118,7 @@ function describeWord(
 export function derivation(v: Value, digits = 4): string {
   const out: string[] = [];
   out.push(`**\`${v.name}\`** = **${v.display}** · ${v.meaning}`);
+  if (v.unused) out.push(`*Not used:* ${v.unused}.`);
   if (v.origin === 'stated' && v.tool) {
     out.push(
       `Stated in the note: \`${v.expression ?? v.display}\` = **${v.display}**, used in place of what fatigue-notes would compute: **${v.tool.display}** (${v.tool.basis}, ${v.tool.why})` +
@@ -168,7 +169,9 @@ function optionKeyDoc(key: string, check: CheckResult, line: number): string {
     .map((n) => check.values[n])
     .filter((v) => v.origin !== 'stated' && v.range && v.range.start.line === line);
   if (driven.length > 0)
-    out.push(`Drives here: ${driven.map((v) => `${v.name} = ${v.display} (${v.meaning})`).join(', ')}`);
+    out.push(
+      `Drives here: ${driven.map((v) => `${v.name} = ${v.display} (${v.meaning}${v.unused ? '; not used' : ''})`).join(', ')}`,
+    );
   return out.join('\n\n');
 }
 

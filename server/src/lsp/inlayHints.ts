@@ -10,8 +10,8 @@ import { isContentLine, type NoteView, overlaps } from './locate';
 
 /** Most values shown beside one line; the rest are in the hover. */
 const MAX_PER_LINE = 4;
-/** Shown in the hover and the panel, not inline (they would crowd the criterion line). */
-const NOT_INLINE = /^(n_f_|sigma_ar$)/;
+/** Shown in the hover and the panel, not inline (they would crowd the criterion line); the per-fibre values (`n_y_neg` ...) too. */
+const NOT_INLINE = /^(n_f_|sigma_ar$)|_(pos|neg)$/;
 
 export function inlayHintsFor(view: NoteView, range: Range): InlayHint[] {
   const out: InlayHint[] = [];
@@ -43,7 +43,7 @@ function hintsOfCheck(view: NoteView, c: CheckResult, range: Range, out: InlayHi
     const shown = ranked.slice(0, MAX_PER_LINE);
     // A stated value: what the tool would compute and why (`fit 1: no notch feature stated`).
     const parts = shown.map((v) =>
-      v.origin === 'stated' && v.tool ? v.tool.label : `${v.name} ${v.display}`,
+      v.origin === 'stated' && v.tool ? v.tool.label : `${v.name} ${v.display}${v.unused ? ' (not used)' : ''}`,
     );
     if (ranked.length > shown.length) parts.push('… more in the hover');
     out.push({

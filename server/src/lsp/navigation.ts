@@ -8,6 +8,7 @@ import {
   type CheckResult,
   ID_PATTERN,
   INPUT_NAMES,
+  isReservedWord,
   type Position,
   type Range,
   RESULT_NAMES,
@@ -164,6 +165,10 @@ export function renameAt(view: NoteView, pos: Position, newName: string): Worksp
   const id = t.check.id as string;
   const edits: TextEdit[] = [];
   if (!t.member) {
+    if (isReservedWord(newName))
+      throw new RenameRefused(
+        `\`${newName}\` is reserved (every JavaScript object has it): it cannot be a check id`,
+      );
     if (!ID_PATTERN.test(newName)) throw new RenameRefused(`\`${newName}\` is not a valid check id`);
     if (newName !== id && checkById(view.result, newName))
       throw new RenameRefused(`a check named \`${newName}\` already exists`);
@@ -171,6 +176,10 @@ export function renameAt(view: NoteView, pos: Position, newName: string): Worksp
     for (const r of idRanges(view, id)) edits.push({ range: r, newText: newName });
   } else {
     if (!NAME.test(newName)) throw new RenameRefused(`\`${newName}\` is not a valid name`);
+    if (isReservedWord(newName))
+      throw new RenameRefused(
+        `\`${newName}\` is reserved (every JavaScript object has it): it cannot be a name in a note`,
+      );
     if (newName in INPUT_NAMES || newName in RESULT_NAMES)
       throw new RenameRefused(`\`${newName}\` is a reserved name with its own meaning`);
     if (newName !== t.member && t.check.values[newName])

@@ -29,6 +29,14 @@ import { inlayHintsFor } from './inlayHints';
 import type { NoteView } from './locate';
 import { definitionAt, prepareRenameAt, RenameRefused, referencesAt, renameAt } from './navigation';
 import {
+  type Checked,
+  changeParams,
+  closeParams,
+  configurationParams,
+  openParams,
+  workspaceFoldersParams,
+} from './notifications';
+import {
   DEFAULT_SETTINGS,
   type FatigueSettings,
   readSettings,
@@ -103,6 +111,26 @@ export function listen(connection: Connection): void {
     }
   }
 
+  /**
+   * Run a notification's handler on its checked params: malformed params are logged and
+   * ignored (a notification has no answer), and a failing handler is logged, never thrown.
+   */
+  function notify<T>(
+    name: string,
+    params: unknown,
+    check: (p: unknown) => Checked<T>,
+    fn: (p: T) => void,
+  ): void {
+    guard(name, undefined, () => {
+      const c = check(params);
+      if (!c.ok) {
+        log(`${name} ignored: ${c.why}`);
+        return;
+      }
+      fn(c.value);
+    });
+  }
+
   const viewOf = (uri: string): NoteView | undefined => documents.view(uri);
 
   async function pullSettings(): Promise<void> {
@@ -123,8 +151,9 @@ export function listen(connection: Connection): void {
     if (canRefreshCodeLens) void connection.sendRequest('workspace/codeLens/refresh').catch(() => undefined);
   }
 
-  connection.onInitialize((params: InitializeParams): InitializeResult => {
-    const caps = params.capabilities;
+  connection.onInitialize((raw: InitializeParams): InitializeResult => {
+    const params = (raw && typeof raw === 'object' ? raw : {}) as Partial<InitializeParams>;
+    const caps = params.capabilities && typeof params.capabilities === 'object' ? params.capabilities : {};
     canPullConfiguration = caps.workspace?.configuration === true;
     canRegisterConfiguration = caps.workspace?.didChangeConfiguration?.dynamicRegistration === true;
     canRefreshInlayHints = caps.workspace?.inlayHint?.refreshSupport === true;
@@ -133,9 +162,12 @@ export function listen(connection: Connection): void {
     const init = (params.initializationOptions ?? {}) as { settings?: unknown; trustedWorkspace?: unknown };
     if (init.settings) settings = readSettings(init.settings);
     if (init.trustedWorkspace === false) allowHistoryReads = false;
-    if (params.workspaceFolders)
-      folders = params.workspaceFolders.map((f) => folderPath(f.uri)).filter(isString);
-    else if (params.rootUri) folders = [folderPath(params.rootUri)].filter(isString);
+    const given = Array.isArray(params.workspaceFolders) ? params.workspaceFolders : undefined;
+    if (given)
+      folders = given
+        .map((f) => (f && typeof f.uri === 'string' ? folderPath(f.uri) : undefined))
+        .filter(isString);
+    else if (typeof params.rootUri === 'string') folders = [folderPath(params.rootUri)].filter(isString);
     return {
       capabilities: {
         textDocumentSync: { openClose: true, change: TextDocumentSyncKind.Incremental },
@@ -164,45 +196,41 @@ export function listen(connection: Connection): void {
         .catch(() => undefined);
     void pullSettings();
     if (canWatchFolders)
-      connection.workspace.onDidChangeWorkspaceFolders((e) => {
-        const removed = new Set(e.removed.map((f) => folderPath(f.uri)));
-        folders = [
-          ...folders.filter((f) => !removed.has(f)),
-          ...e.added.map((f) => folderPath(f.uri)).filter(isString),
-        ];
-        documents.reevaluateAll();
-      });
+      connection.workspace.onDidChangeWorkspaceFolders((e) =>
+        notify('didChangeWorkspaceFolders', e, workspaceFoldersParams, ({ added, removed }) => {
+          const gone = new Set(removed.map(folderPath));
+          folders = [...folders.filter((f) => !gone.has(f)), ...added.map(folderPath).filter(isString)];
+          documents.reevaluateAll();
+        }),
+      );
   });
 
-  connection.onDidChangeConfiguration((change) => {
-    if (canPullConfiguration) void pullSettings();
-    else {
-      const s = (change.settings as Record<string, unknown> | null)?.[SETTINGS_SECTION];
-      applySettings(readSettings(s));
-    }
-  });
+  connection.onDidChangeConfiguration((change) =>
+    notify('didChangeConfiguration', change, configurationParams, ({ settings: given }) => {
+      if (canPullConfiguration) void pullSettings();
+      else {
+        const s =
+          given && typeof given === 'object'
+            ? (given as Record<string, unknown>)[SETTINGS_SECTION]
+            : undefined;
+        applySettings(readSettings(s));
+      }
+    }),
+  );
 
   connection.onDidOpenTextDocument((p) =>
-    guard('didOpen', undefined, () => {
-      openedAt.set(p.textDocument.uri, performance.now());
-      documents.open(
-        p.textDocument.uri,
-        p.textDocument.languageId,
-        p.textDocument.version,
-        p.textDocument.text,
-      );
+    notify('didOpen', p, openParams, (o) => {
+      openedAt.set(o.uri, performance.now());
+      documents.open(o.uri, o.languageId, o.version, o.text);
     }),
   );
   connection.onDidChangeTextDocument((p) =>
-    guard('didChange', undefined, () =>
-      documents.change(p.textDocument.uri, p.textDocument.version, p.contentChanges),
-    ),
+    notify('didChange', p, changeParams, (c) => documents.change(c.uri, c.version, c.changes)),
   );
   connection.onDidCloseTextDocument((p) =>
-    guard('didClose', undefined, () => {
-      openedAt.delete(p.textDocument.uri);
-      if (documents.close(p.textDocument.uri))
-        void connection.sendDiagnostics({ uri: p.textDocument.uri, diagnostics: [] });
+    notify('didClose', p, closeParams, ({ uri }) => {
+      openedAt.delete(uri);
+      if (documents.close(uri)) void connection.sendDiagnostics({ uri, diagnostics: [] });
     }),
   );
   connection.onDidChangeWatchedFiles(() => guard('watchedFiles', undefined, () => documents.reevaluateAll()));

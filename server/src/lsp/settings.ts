@@ -42,7 +42,8 @@ export function readSettings(raw: unknown): FatigueSettings {
     o.defaultRequiredSafetyFactor > 0
       ? o.defaultRequiredSafetyFactor
       : null;
-  const lints: Record<string, boolean> = {};
+  // A table of the client's words: nothing behind it (`__proto__`, `constructor` are plain keys).
+  const lints: Record<string, boolean> = Object.create(null);
   if (o.lints && typeof o.lints === 'object')
     for (const [k, v] of Object.entries(o.lints as Record<string, unknown>))
       if (typeof v === 'boolean') lints[k] = v;

@@ -197,8 +197,13 @@ function requirementsTable(c: CheckResult): string {
 </table>`;
 }
 
+function notUsed(v: Value): string {
+  return v.unused ? `<div class="note">Not used: ${esc(v.unused)}.</div>` : '';
+}
+
 function derivation(v: Value): string {
   const parts: string[] = [];
+  if (v.unused) parts.push(notUsed(v));
   if (v.formula) parts.push(`<div class="formula">${esc(v.formula)}</div>`);
   if (v.inputs && v.inputs.length > 0)
     parts.push(
@@ -227,7 +232,7 @@ function inputCell(v: Value): string {
     const tool = v.tool
       ? `<div class="tool">The tool would compute ${esc(v.tool.display)} from <code>${esc(v.tool.formula)}</code> (${esc(v.tool.source)}).</div>`
       : '';
-    return `${asWritten}${tool}`;
+    return `${notUsed(v)}${asWritten}${tool}`;
   }
   return derivation(v);
 }

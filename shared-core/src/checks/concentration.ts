@@ -361,8 +361,10 @@ export function concentration(
     const shear = mode === 'torsion';
     const featureRange = ctx.optionRange('feature') ?? ctx.header;
     let Kf: number | null;
-    if (ctx.has(kfName) && !ctx.has(ktName)) {
+    if (ctx.has(kfName)) {
+      // A stated Kf ends the Kt / q chain: nothing of it is asked for, and what is stated of it shows as not used.
       Kf = ctx.input(kfName)!;
+      ctx.replaced(kfName, [ktName, shear ? 'qs' : 'q', 'r', 'D', 'd_hole', 'w_c', 'h_c']);
     } else if (s.geometry === 'shell' && feature === 'shell-cutout') {
       Kf = shellCutoutConcentration(ctx, s, Sut, cls, featureRange);
     } else {
@@ -371,7 +373,9 @@ export function concentration(
       let r: number | undefined;
       let fitInputs: string[] = [];
       if (feature && feature !== 'none') {
-        const fit = fitKt(ctx, feature, mode);
+        const fit = ctx.has(ktName)
+          ? ctx.replacedBy(ktName, () => fitKt(ctx, feature, mode))
+          : fitKt(ctx, feature, mode);
         if (fit) {
           fitInputs = fit.inputs;
           r = fit.r;

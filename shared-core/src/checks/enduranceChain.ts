@@ -15,6 +15,7 @@ import {
   temperatureFactor,
 } from '../marin';
 import type { SurfaceFinish } from '../marin/surface';
+import { FAMILIES } from '../materials';
 import { type SnLine, snLineFromBasquin, snLineThrough } from '../sn';
 import type { Strengths } from './material';
 
@@ -30,16 +31,25 @@ export interface EnduranceChain {
   shear: boolean;
 }
 
-/** Marin factors (stated values win) and the corrected strength. */
-export function enduranceChain(
+interface MarinFactors {
+  ka: number | null;
+  kb: number | null;
+  kc: number | null;
+  kd: number | null;
+  ke: number | null;
+  kmisc: number | null;
+  /** Every factor known (the Marin equation can be applied). */
+  all: boolean;
+}
+
+/** Marin factors, stated values winning over the derived ones. */
+function marinFactors(
   ctx: CheckContext,
-  st: Strengths,
+  Sut: number,
   load: LoadKind,
   geometry: 'round' | 'plate' | 'shell',
   hasAxial: boolean,
-): EnduranceChain {
-  const shear = load === 'torsion';
-  const Sut = st.Sut;
+): MarinFactors {
   let ok = true;
   // ka: surface
   let ka: number | null = null;
@@ -171,6 +181,93 @@ export function enduranceChain(
         ctx.rangeOf(n),
       );
   }
+  return {
+    ka,
+    kb,
+    kc,
+    kd,
+    ke,
+    kmisc,
+    all: ok && ka !== null && kb !== null && kc !== null && kd !== null && ke !== null && kmisc !== null,
+  };
+}
+
+function factorValues(k: MarinFactors) {
+  return { ka: k.ka!, kb: k.kb!, kc: k.kc!, kd: k.kd!, ke: k.ke!, kmisc: k.kmisc! };
+}
+
+const MARIN_INPUTS = ['ka', 'kb', 'kc', 'kd', 'ke', 'kmisc'];
+
+/**
+ * Life of the reference strength of a material without an endurance limit: stated `N_ref`,
+ * else the library entry's; without either the S-N line cannot be drawn (error).
+ */
+function referenceLife(ctx: CheckContext, st: Strengths): number | undefined {
+  const mat = st.material;
+  if (ctx.has('N_ref')) return ctx.input('N_ref');
+  if (mat?.N_ref !== undefined)
+    return ctx.library(
+      'N_ref',
+      mat.N_ref,
+      `${mat.name}: life of the library's fatigue strength; ${mat.source}`,
+      ctx.optionRange('material'),
+    );
+  const usual = FAMILIES[st.family].usualReferenceLife;
+  ctx.diag(
+    'error',
+    'missing-reference-life',
+    `\`${st.family}\` has no endurance limit: state the life \`N_ref\` (cycles) at which the reference strength holds${usual ? ` (typical tables of this family give it at ${usual.toExponential(0).replace('+', '')} cycles)` : ''}`,
+    ctx.rangeOf(ctx.has('Sf_ref') ? 'Sf_ref' : 'Sut'),
+    usual
+      ? [
+          ctx.insertFix(
+            `State \`N_ref = ${usual.toExponential(0).replace('+', '')}\` (check the life of your data)`,
+            `N_ref = ${usual.toExponential(0).replace('+', '')}`,
+          ),
+        ]
+      : [],
+  );
+  return undefined;
+}
+
+/** Rotating-beam strength at the reference life: stated `Sf_ref` (or `Se_prime`), else the library's. */
+function referenceStrength(ctx: CheckContext, st: Strengths, N_ref: number | undefined): number | undefined {
+  const mat = st.material;
+  if (ctx.has('Sf_ref')) return ctx.input('Sf_ref');
+  if (ctx.has('Se_prime')) return ctx.input('Se_prime');
+  if (mat?.Sf_ref !== undefined)
+    return ctx.library(
+      'Sf_ref',
+      mat.Sf_ref,
+      `${mat.name}: rotating-beam fatigue strength at ${(N_ref ?? mat.N_ref ?? 0).toExponential(0).replace('+', '')} cycles; ${mat.source}`,
+    );
+  ctx.diag(
+    'error',
+    'missing-reference-strength',
+    `\`${st.family}\` has no endurance limit: state the rotating-beam fatigue strength \`Sf_ref\` and the life \`N_ref\` it holds at${st.cls === 'aluminium' || st.cls === 'aluminium-cast' ? " (the Aluminum Association's typical properties give it at 5e8 cycles)" : ''}`,
+    ctx.rangeOf('Sut'),
+  );
+  return undefined;
+}
+
+/**
+ * Marin factors (stated values win) and the corrected strength. A stated `Se` (or `S_ref`)
+ * ends the chain it replaces: the factors are still worked out where the note allows, for
+ * the tool's own value beside the stated one, but they raise no diagnostic and show as not used.
+ */
+export function enduranceChain(
+  ctx: CheckContext,
+  st: Strengths,
+  load: LoadKind,
+  geometry: 'round' | 'plate' | 'shell',
+  hasAxial: boolean,
+): EnduranceChain {
+  const shear = load === 'torsion';
+  const Sut = st.Sut;
+  const hasEndurance = st.enduranceLimit;
+  const sName = hasEndurance ? 'Se' : 'S_ref';
+  const chain = <T>(run: () => T): T => (ctx.has(sName) ? ctx.replacedBy(sName, run) : run());
+  const k = chain(() => marinFactors(ctx, Sut, load, geometry, hasAxial));
 
   // Ultimate of the route and the base strength.
   const Su = shear
@@ -181,65 +278,37 @@ export function enduranceChain(
       ) ?? 0.67 * Sut)
     : Sut;
   let S: number | null = null;
-  let hasEndurance = st.enduranceLimit;
-  let N_ref = 1e6;
+  let N_ref: number | undefined = 1e6;
   if (hasEndurance) {
-    const prime = ctx.has('Se_prime')
-      ? ctx.input('Se_prime')!
-      : ctx.result('Se_prime', rotatingBeamEndurance(st.cls, Sut), ['Sut'], { range: ctx.rangeOf('Sut') });
-    if (prime === null) hasEndurance = false;
-    else if (
-      ok &&
-      ka !== null &&
-      kb !== null &&
-      kc !== null &&
-      kd !== null &&
-      ke !== null &&
-      kmisc !== null
-    ) {
-      S = ctx.result(
-        'Se',
-        marinCorrected('Se', { ka, kb, kc, kd, ke, kmisc }, prime, 'Se_prime'),
-        ['ka', 'kb', 'kc', 'kd', 'ke', 'kmisc', 'Se_prime'],
-        { range: ctx.header, tool: { basis: 'Marin equation' } },
-      );
-    }
-  }
-  if (!hasEndurance) {
-    const mat = st.material;
-    const base = ctx.input('Se_prime') ?? mat?.Sf_ref;
-    N_ref = mat?.N_ref ?? 5e8;
-    if (base === undefined) {
+    const reference = ['Sf_ref', 'N_ref', 'S_ref'].filter((n) => ctx.has(n));
+    if (reference.length > 0) {
       ctx.diag(
-        'error',
-        'missing-input',
-        'no reference fatigue strength for this material: state `Se_prime` (strength at the reference life)',
+        'warning',
+        'reference-strength-unused',
+        `\`${st.family}\` has an endurance limit: ${reference.map((n) => `\`${n}\``).join(', ')} not used (state \`Se_prime\` or \`Se\`, or the family of a material without one)`,
+        ctx.rangeOf(reference[0]),
       );
-    } else if (
-      ok &&
-      ka !== null &&
-      kb !== null &&
-      kc !== null &&
-      kd !== null &&
-      ke !== null &&
-      kmisc !== null
-    ) {
-      if (!ctx.has('Se_prime') && mat)
-        ctx.library(
-          'Sf_ref',
-          base,
-          `${mat.name}: rotating-beam fatigue strength at ${N_ref.toExponential(0)} cycles; ${mat.source}`,
-        );
-      S = ctx.result(
-        'S_ref',
-        marinCorrected('S_ref', { ka, kb, kc, kd, ke, kmisc }, base, 'Sf_ref'),
-        ['ka', 'kb', 'kc', 'kd', 'ke', 'kmisc', 'Sf_ref'],
-        {
-          dim: 'stress',
-          range: ctx.header,
-        },
-      );
+      ctx.replaced('Se', reference, `\`${st.family}\` has an endurance limit: Se_prime and Se are used`);
     }
+    // Se_prime from Sut by family; a stated Se_prime ends that estimate (kept as the tool's own value).
+    const estimate = () =>
+      ctx.result('Se_prime', rotatingBeamEndurance(st.cls, Sut), ['Sut'], { range: ctx.rangeOf('Sut') });
+    const prime = chain(() => (ctx.has('Se_prime') ? ctx.replacedBy('Se_prime', estimate) : estimate()));
+    const tool = k.all && prime !== null ? marinCorrected('Se', factorValues(k), prime, 'Se_prime') : null;
+    S = ctx.result('Se', tool, [...MARIN_INPUTS, 'Se_prime'], {
+      range: ctx.header,
+      tool: { basis: 'Marin equation' },
+    });
+  } else {
+    N_ref = referenceLife(ctx, st);
+    const base = chain(() => referenceStrength(ctx, st, N_ref));
+    const tool =
+      k.all && base !== undefined ? marinCorrected('S_ref', factorValues(k), base, 'Sf_ref') : null;
+    S = ctx.result('S_ref', tool, [...MARIN_INPUTS, 'Sf_ref'], {
+      dim: 'stress',
+      range: ctx.header,
+      tool: { basis: 'Marin equation' },
+    });
   }
 
   // S-N line.
@@ -257,7 +326,7 @@ export function enduranceChain(
         ctx.rangeOf('sigma_f_prime'),
       );
     }
-  } else if (S !== null) {
+  } else if (S !== null && N_ref !== undefined) {
     const f = ctx.has('f')
       ? ctx.input('f')!
       : ctx.result('f', fatigueStrengthFraction(Sut), ['Sut'], { range: ctx.rangeOf('Sut') });

@@ -2,6 +2,12 @@
  * Loads of a check and the nominal stresses they cause at the checked section: round
  * shafts (solid-section formulas with `d`), plates with a hole (net section), and
  * thin-walled shells (hoop and longitudinal membrane stresses).
+ *
+ * Loads keep their signs. Each load is a signed mean and a signed amplitude: the load is
+ * `mean + amplitude` at the first instant of the cycle (the `_max` values as written) and
+ * `mean - amplitude` at the second (the `_min` values), every load of the check at the same
+ * instants (in phase). A negative amplitude is a load that falls while the others rise; the
+ * critical points of the section (`criticalPoints.ts`) combine the components with these signs.
  */
 import { type Computed, computed } from '../computed';
 import type { CheckContext } from '../language/checkContext';
@@ -15,6 +21,7 @@ import {
   torsionStress,
 } from '../stress';
 
+/** A load or stress: signed amplitude `a` and signed mean `m` (`m + a` at the first instant, `m - a` at the second). */
 export interface Component {
   a: number;
   m: number;
@@ -31,6 +38,12 @@ export interface NominalStresses {
   shell?: { kind: 'cylinder' | 'sphere'; hoop: Component; long: Component };
   /** Line that drives the stresses (for inline results). */
   driver: Range;
+  /**
+   * The bending stress comes from a moment (`M`) on a round section: it is +M c/I at one
+   * extreme fibre and -M c/I at the other. (A stated `sigma_a`/`sigma_m` is the stress at the
+   * point the note means, and is not mirrored.)
+   */
+  bendingFromMoment?: boolean;
 }
 
 type Base = 'M' | 'T' | 'F' | 'p';
@@ -54,7 +67,7 @@ export function readPair(ctx: CheckContext, base: Base): Component | undefined {
     return undefined;
   }
   if (hasMaxMin) {
-    let max = ctx.input(maxN);
+    const max = ctx.input(maxN);
     let min = ctx.input(minN);
     if (max === undefined && min !== undefined) {
       ctx.diag(
@@ -87,19 +100,24 @@ export function readPair(ctx: CheckContext, base: Base): Component | undefined {
     }
     if (max === undefined) return undefined;
     if (max < min) {
+      // Read as written: the `_max` values of all loads act together, so this load falls while
+      // the others rise (its amplitude is negative). Alone it makes no difference.
       ctx.diag(
         'warning',
         'max-below-min',
-        `\`${maxN}\` is below \`${minN}\`: the two are swapped`,
+        `\`${maxN}\` is below \`${minN}\`: read as written, ${base} is at its smaller value when the other loads are at their \`_max\` (opposite phase, a negative \`${aN}\`); swap the two if that is a slip`,
         ctx.rangeOf(maxN),
       );
-      [max, min] = [min, max];
     }
     const dim = base === 'F' ? 'force' : base === 'p' ? 'stress' : 'moment';
     const r = ctx.rangeOf(maxN);
     const a = ctx.result(
       aN,
-      computed((max - min) / 2, `${aN} = (${maxN} - ${minN}) / 2`, 'definition of the alternating component'),
+      computed(
+        (max - min) / 2,
+        `${aN} = (${maxN} - ${minN}) / 2`,
+        'definition of the alternating component (signed: the load at the `_max` instant minus the mean)',
+      ),
       [maxN, minN],
       { dim, range: r, meaning: `${base} amplitude` },
     );
@@ -109,7 +127,7 @@ export function readPair(ctx: CheckContext, base: Base): Component | undefined {
       [maxN, minN],
       { dim, range: r, meaning: `mean ${base}` },
     );
-    return { a: Math.abs(a ?? 0), m: m ?? 0 };
+    return { a: a ?? 0, m: m ?? 0 };
   }
   const a = ctx.input(aN);
   let m = ctx.input(mN);
@@ -131,7 +149,7 @@ export function readPair(ctx: CheckContext, base: Base): Component | undefined {
       ctx.rangeOf(aN),
     );
   }
-  return { a: Math.abs(a), m };
+  return { a, m };
 }
 
 function readStressPair(ctx: CheckContext, aN: string, mN: string): Component | undefined {
@@ -151,7 +169,7 @@ function readStressPair(ctx: CheckContext, aN: string, mN: string): Component | 
     m = 0;
     ctx.diag('information', 'defaulted-load', `\`${mN}\` not stated: mean 0 assumed`, ctx.rangeOf(aN));
   }
-  return { a: Math.abs(a), m };
+  return { a, m };
 }
 
 const ZERO: Component = { a: 0, m: 0 };
@@ -194,7 +212,48 @@ function stressOf(
   });
   const a = ctx.result(aName, sub(ca, 'a'), [`${loadBase}_a`, ...inputs], { dim: 'stress', range });
   const m = ctx.result(mName, sub(cm, 'm'), [`${loadBase}_m`, ...inputs], { dim: 'stress', range });
-  return { a: Math.abs(a ?? 0), m: m ?? 0 };
+  return { a: a ?? 0, m: m ?? 0 };
+}
+
+/** Whether the check's round section rotates (`rotation:`, rotating when not stated). */
+export function isRotating(ctx: CheckContext): boolean {
+  return (ctx.option('rotation') ?? 'rotating') === 'rotating';
+}
+
+/**
+ * Bending stress of a rotating round section. A fibre of a shaft that turns under a moment
+ * passes through the tension and the compression side once a revolution, so a moment that is
+ * steady in space is completely reversed at every fibre, and a moment that varies slowly
+ * between `M_min` and `M_max` reverses the largest of them: amplitude 32 max|M| / (pi d^3),
+ * mean 0 (Budynas & Nisbett, Shigley's MED 10th ed., Sec. 6-14 and Ex. 7-1 to 7-3: the steady
+ * moment of a rotating shaft is taken as fully reversed, M_a = M, M_m = 0).
+ */
+function rotatingBending(ctx: CheckContext, M: Component, d: number, range: Range): Component {
+  const peak = Math.abs(M.m) + Math.abs(M.a);
+  const base = bendingStress(peak, d);
+  const a = ctx.result(
+    'sigma_a',
+    {
+      ...base,
+      formula:
+        'sigma_a = 32 * (|M_m| + |M_a|) / (pi * d^3)  (rotating: the largest moment is fully reversed at every fibre)',
+      source:
+        "Budynas & Nisbett, Shigley's MED 10th ed., Sec. 6-14, Ex. 7-1: a steady moment on a rotating shaft is completely reversed",
+    },
+    ['M_a', 'M_m', 'd'],
+    { dim: 'stress', range },
+  );
+  ctx.result(
+    'sigma_m',
+    computed(
+      0,
+      'sigma_m = 0  (rotating: every fibre passes both sides of the moment each revolution)',
+      "Budynas & Nisbett, Shigley's MED 10th ed., Sec. 6-14, Ex. 7-1",
+    ),
+    ['M_m'],
+    { dim: 'stress', range },
+  );
+  return { a: a ?? 0, m: 0 };
 }
 
 export function nominalStresses(ctx: CheckContext): NominalStresses | null {
@@ -295,8 +354,8 @@ export function nominalStresses(ctx: CheckContext): NominalStresses | null {
       torsion: ZERO,
       shell: {
         kind: shellKind,
-        hoop: { a: Math.abs(hoopA ?? 0), m: hoopM ?? 0 },
-        long: { a: Math.abs(longA ?? 0), m: longM ?? 0 },
+        hoop: { a: hoopA ?? 0, m: hoopM ?? 0 },
+        long: { a: longA ?? 0, m: longM ?? 0 },
       },
       driver: r,
     };
@@ -346,19 +405,22 @@ export function nominalStresses(ctx: CheckContext): NominalStresses | null {
   let bending = sB ?? ZERO;
   let torsion = sT ?? ZERO;
   let axial = sX ?? ZERO;
+  if (sB && ctx.option('rotation') === 'rotating' && sB.m !== 0) {
+    // A bending mean cannot stay at a fibre of a shaft that turns under it (rotatingBending).
+    bending = { a: Math.abs(sB.a) + Math.abs(sB.m), m: 0 };
+    ctx.diag(
+      'information',
+      'rotating-stated-mean',
+      '`rotation: rotating`: every fibre passes both sides of the bending stress each revolution, so the stated bending mean is reversed with the amplitude (|sigma_a| + |sigma_m|, mean 0; Shigley Sec. 6-14, Ex. 7-1). For the stresses at one point of a section that does not turn, state `rotation: non-rotating`',
+      ctx.rangeOf('sigma_m'),
+    );
+  }
   if (M || T || F) {
     const d = need(ctx, 'd', 'a load on a round section');
     if (d === undefined) return null;
-    if (M)
-      bending = stressOf(
-        ctx,
-        'sigma',
-        M,
-        (m) => bendingStress(m, d),
-        'M',
-        ctx.rangeOf(ctx.has('M_max') ? 'M_max' : 'M_a'),
-        ['d'],
-      );
+    const mRange = ctx.rangeOf(ctx.has('M_max') ? 'M_max' : 'M_a');
+    if (M && isRotating(ctx)) bending = rotatingBending(ctx, M, d, mRange);
+    else if (M) bending = stressOf(ctx, 'sigma', M, (m) => bendingStress(m, d), 'M', mRange, ['d']);
     if (T)
       torsion = stressOf(
         ctx,
@@ -388,7 +450,7 @@ export function nominalStresses(ctx: CheckContext): NominalStresses | null {
     );
     return null;
   }
-  return { geometry: 'round', bending, axial, torsion, driver };
+  return { geometry: 'round', bending, axial, torsion, driver, bendingFromMoment: M !== undefined };
 }
 
 export function active(c: Component): boolean {

@@ -1,37 +1,50 @@
-/** Strengths and material class of a check: stated values win over the library's. */
+/**
+ * Strengths, family and class of a check's material: stated values win over the library's;
+ * the family comes from the library key, else from `material-family:`, else a steel is
+ * assumed (announced after the method, where it changed a result: `runMethod.ts`).
+ *
+ * Impossible values (Sy above Sut, a strength beyond the family, a key the library does not
+ * have, a family that contradicts the key) are found before the method runs
+ * (`language/plausibility.ts`) and withhold the results.
+ */
 
 import type { CheckContext } from '../language/checkContext';
-import { findMaterial, type Material, type MaterialClass, nearestMaterialKeys } from '../materials';
+import {
+  FAMILIES,
+  familyOfClass,
+  findMaterial,
+  isFamily,
+  type Material,
+  type MaterialClass,
+  type MaterialFamily,
+} from '../materials';
 
 export interface Strengths {
   Sut: number;
   Sy: number | undefined;
+  /** Library class of the material (the family's class): endurance estimate and notch data. */
   cls: MaterialClass;
+  family: MaterialFamily;
+  /** False when neither `material:` nor `material-family:` names the family (a steel is assumed). */
+  familyStated: boolean;
   enduranceLimit: boolean;
   material?: Material;
 }
 
+/** The family a check's options name (library key first), or undefined when none does. */
+export function statedFamily(ctx: CheckContext): { family: MaterialFamily; material?: Material } | undefined {
+  const key = ctx.options.get('material')?.value.text;
+  const material = key !== undefined ? findMaterial(key) : undefined;
+  if (material) return { family: familyOfClass(material.class), material };
+  const word = ctx.option('material-family');
+  if (word !== undefined && isFamily(word)) return { family: word };
+  return undefined;
+}
+
 export function readStrengths(ctx: CheckContext): Strengths | null {
-  const matStmt = ctx.options.get('material');
-  let material: Material | undefined;
-  if (matStmt) {
-    material = findMaterial(matStmt.value.text);
-    if (!material) {
-      const near = nearestMaterialKeys(matStmt.value.text, 3);
-      ctx.diag(
-        'error',
-        'unknown-material',
-        `\`${matStmt.value.text}\` is not in the material library${near.length ? `: did you mean ${near.map((k) => `\`${k}\``).join(', ')}?` : ''}`,
-        matStmt.value.range,
-        near.map((k, i) => ({
-          title: `Change to \`${k}\``,
-          edits: [{ range: matStmt.value.range, newText: k }],
-          preferred: i === 0,
-        })),
-      );
-    }
-  }
-  const matRange = matStmt?.whole;
+  const named = statedFamily(ctx);
+  const material = named?.material;
+  const matRange = ctx.optionRange('material');
   const src = material ? `${material.name} (${material.condition}): ${material.source}` : '';
   let Sut: number | undefined = ctx.input('Sut');
   if (Sut === undefined && material) Sut = ctx.library('Sut', material.Sut, src, matRange);
@@ -49,13 +62,6 @@ export function readStrengths(ctx: CheckContext): Strengths | null {
     ctx.diag('error', 'absurd-value', '`Sut` must be positive', ctx.rangeOf('Sut'));
     return null;
   }
-  if (Sut > 5e9)
-    ctx.diag(
-      'warning',
-      'absurd-value',
-      '`Sut` above 5000 MPa is beyond any engineering metal: check the unit',
-      ctx.rangeOf('Sut'),
-    );
   if (Sy === undefined) {
     ctx.diag(
       'warning',
@@ -65,22 +71,17 @@ export function readStrengths(ctx: CheckContext): Strengths | null {
   } else if (Sy <= 0) {
     ctx.diag('error', 'absurd-value', '`Sy` must be positive', ctx.rangeOf('Sy'));
     Sy = undefined;
-  } else if (Sy > Sut) {
-    ctx.diag(
-      'warning',
-      'sy-above-sut',
-      `Sy (${ctx.values.Sy?.display}) is above Sut (${ctx.values.Sut?.display}): yield cannot exceed the ultimate strength; check both values`,
-      ctx.has('Sy') ? ctx.rangeOf('Sy') : ctx.rangeOf('Sut'),
-    );
   }
-  let cls: MaterialClass = 'steel';
-  if (material) cls = material.class;
-  else if (!ctx.has('Se_prime'))
-    ctx.diag(
-      'information',
-      'assumed-steel',
-      'no `material:` given: a steel is assumed for the endurance estimate and the notch sensitivity',
-    );
-  const enduranceLimit = material ? material.enduranceLimit : true;
-  return { Sut, Sy, cls, enduranceLimit, ...(material ? { material } : {}) };
+  const family: MaterialFamily = named?.family ?? 'steel';
+  const cls: MaterialClass = material ? material.class : FAMILIES[family].cls;
+  const enduranceLimit = material ? material.enduranceLimit : FAMILIES[family].enduranceLimit;
+  return {
+    Sut,
+    Sy,
+    cls,
+    family,
+    familyStated: named !== undefined,
+    enduranceLimit,
+    ...(material ? { material } : {}),
+  };
 }

@@ -32,7 +32,8 @@ const BASE_DIM: Record<LevelBase, DimKey> = {
   tau: 'stress',
 };
 
-const NAMES: Record<string, NameRule> = {};
+/** Without `Object.prototype`: `NAMES[name]` answers for the spectrum's own names only. */
+const NAMES: Record<string, NameRule> = Object.create(null);
 for (const base of Object.keys(BASE_DIM) as LevelBase[]) {
   const parts: Part[] = base === 'sigma_ax' || base === 'tau' ? ['a', 'm'] : ['a', 'm', 'max', 'min'];
   for (const part of parts) NAMES[`${base}_${part}`] = { base, part, dim: BASE_DIM[base] };
@@ -41,7 +42,7 @@ for (const base of Object.keys(BASE_DIM) as LevelBase[]) {
 /** Names a spectrum level may use, for messages and completion. */
 export const SPECTRUM_NAMES: readonly string[] = [...Object.keys(NAMES), 'n'];
 
-/** Amplitude (>= 0) and signed mean of one load of a level, SI. */
+/** Signed amplitude and signed mean of one load of a level, SI (`m + a` at the level's `_max` instant, in phase with the other loads). */
 export interface LevelLoad {
   a: number;
   m: number;
@@ -186,10 +187,10 @@ function readLevel(ctx: CheckContext, stmt: SpectrumStatement): SpectrumLevel | 
         ok = false;
         continue;
       }
-      loads[base] = { a: Math.abs(p.a.si), m: p.m?.si ?? 0 };
+      loads[base] = { a: p.a.si, m: p.m?.si ?? 0 };
       continue;
     }
-    let max = p.max?.si;
+    const max = p.max?.si;
     let min = p.min?.si;
     if (max === undefined) {
       ctx.diag(
@@ -214,7 +215,15 @@ function readLevel(ctx: CheckContext, stmt: SpectrumStatement): SpectrumLevel | 
         continue;
       }
     }
-    if (max < min) [max, min] = [min, max];
+    if (max < min)
+      // Read as written: the `_max` values of the level's loads act together (this load falls
+      // while the others rise). Alone it makes no difference.
+      ctx.diag(
+        'warning',
+        'max-below-min',
+        `\`${base}_max\` is below \`${base}_min\`: read as written, ${base} is at its smaller value when the level's other loads are at their \`_max\` (opposite phase); swap the two if that is a slip`,
+        p.max!.range,
+      );
     loads[base] = { a: (max - min) / 2, m: (max + min) / 2 };
   }
   if (ok && Object.keys(loads).length === 0) {

@@ -5,6 +5,11 @@
  * `shellStresses(kind, 1, D_i, t)` ...), the concentration factors of the notch, and the
  * equivalent amplitude and mean at the notch of any load level. Everything is linear in the
  * loads, so the stresses per unit load are computed once and scaled for every level or cycle.
+ *
+ * The notch stresses are those of each critical point of the section (criticalPoints.ts): both
+ * extreme fibres of a non-rotating round section bent by a moment (the bending stress with its
+ * sign at one, the opposite sign at the other, each added to the axial stress with its sign), one
+ * point otherwise.
  */
 import type { Computed } from '../computed';
 import type { CheckContext } from '../language/checkContext';
@@ -16,11 +21,13 @@ import {
   equivalentStresses,
   plateGrossStress,
   plateNetStress,
+  pointEquivalentStresses,
   type ShellKind,
   shellStresses,
   torsionStress,
 } from '../stress';
 import { type Concentration, concentration } from './concentration';
+import { damageFibrePoints, isRotating, ONLY_POINT, type SectionPoint } from './criticalPoints';
 import type { LoadKind } from './enduranceChain';
 import type { Geometry, NominalStresses } from './loads';
 import type { Strengths } from './material';
@@ -45,6 +52,10 @@ export interface DamageSection {
   /** The load kind for the Marin load factor. */
   loadKind: LoadKind;
   hasAxial: boolean;
+  /** A rotating round section: one point, amplitudes added as magnitudes (as a stress-life check). */
+  rotating: boolean;
+  /** The points evaluated: both extreme fibres, or the only point. */
+  points: SectionPoint[];
 }
 
 function positive(ctx: CheckContext, name: string, why: string, range: Range): number | undefined {
@@ -196,6 +207,10 @@ export function damageSection(
       : loadKind === 'torsion'
         ? 'shear'
         : 'combined';
+  // Stated nominal stresses are the engineer's point: they rotate only when the note says so.
+  const rotating =
+    geometry === 'round' && (used.has('M') ? isRotating(ctx) : ctx.option('rotation') === 'rotating');
+  const fibres = route === 'combined' && geometry === 'round' && !rotating && used.has('M');
   return {
     geometry,
     ...(shellKind ? { shellKind } : {}),
@@ -206,6 +221,8 @@ export function damageSection(
     route,
     loadKind,
     hasAxial: ax,
+    rotating,
+    points: fibres ? damageFibrePoints() : [ONLY_POINT],
   };
 }
 
@@ -220,29 +237,30 @@ function vonMises2(s1: number, s2: number): number {
 }
 
 /**
- * Equivalent amplitude and (signed) mean at the notch of one load level, Pa: the contract's
- * combined-loading rule (von Mises, axial amplitude / 0.85) as in a stress-life check; in pure
- * torsion the shear stresses themselves, the mean as a magnitude (the sign of a torque does not
- * change its mean-stress effect: common practice, no source); a plain shell by the von Mises
- * stress of its membrane stresses.
+ * Equivalent amplitude and (signed) mean at the notch of one load level, Pa, at each point of
+ * `sec.points` (in that order): the contract's combined-loading rule (von Mises, axial amplitude
+ * / 0.85) as in a stress-life check, with the signed components at the point (a rotating section:
+ * the largest moment fully reversed, amplitudes added as magnitudes); in pure torsion the shear stresses themselves, the mean as a
+ * magnitude (the sign of a torque does not change its mean-stress effect: common practice, no
+ * source); a plain shell by the von Mises stress of its membrane stresses, signed with their sum.
  */
-export function notchEquivalent(sec: DamageSection, loads: LevelLoads): { sa: number; sm: number } {
+export function notchEquivalent(sec: DamageSection, loads: LevelLoads): Array<{ sa: number; sm: number }> {
   const c = sec.conc;
   if (sec.route === 'shear') {
     const T = scaled(sec, 'T', loads.T);
     const tau = scaled(sec, 'tau', loads.tau);
-    return { sa: c.Kfs * Math.abs(T.a + tau.a), sm: c.Kfsm * Math.abs(T.m + tau.m) };
+    return [{ sa: c.Kfs * Math.abs(T.a + tau.a), sm: c.Kfsm * Math.abs(T.m + tau.m) }];
   }
   if (sec.route === 'shell-plain' || sec.route === 'shell-cutout') {
     const p = loads.p ?? { a: 0, m: 0 };
     const h = sec.perUnit.p?.value ?? 0;
     const l = sec.longPerUnit?.value ?? 0;
     if (sec.route === 'shell-cutout') {
-      return { sa: (c.Kf_ax * h * p.a) / AXIAL_LOAD_FACTOR, sm: c.Kf_axm * h * p.m };
+      return [{ sa: Math.abs(c.Kf_ax * h * p.a) / AXIAL_LOAD_FACTOR, sm: c.Kf_axm * h * p.m }];
     }
     const sa = vonMises2(h * p.a, l * p.a) / AXIAL_LOAD_FACTOR;
     const vm = vonMises2(h * p.m, l * p.m);
-    return { sa, sm: h * p.m + l * p.m < 0 ? -vm : vm };
+    return [{ sa, sm: h * p.m + l * p.m < 0 ? -vm : vm }];
   }
   const M = scaled(sec, 'M', loads.M);
   const sB = scaled(sec, 'sigma', loads.sigma);
@@ -250,14 +268,23 @@ export function notchEquivalent(sec: DamageSection, loads: LevelLoads): { sa: nu
   const sX = scaled(sec, 'sigma_ax', loads.sigma_ax);
   const T = scaled(sec, 'T', loads.T);
   const tau = scaled(sec, 'tau', loads.tau);
-  const eq = equivalentStresses({
-    ...c,
-    sigma_a: M.a + sB.a,
-    sigma_m: M.m + sB.m,
-    sigma_ax_a: F.a + sX.a,
-    sigma_ax_m: F.m + sX.m,
-    tau_a: T.a + tau.a,
-    tau_m: T.m + tau.m,
+  return sec.points.map((pt) => {
+    // A rotating shaft reverses its largest moment at every fibre (loads.ts, rotatingBending).
+    // A stated bending stress on a section said to rotate is reversed the same way.
+    const bend = sec.rotating
+      ? { a: Math.abs(M.a) + Math.abs(M.m) + Math.abs(sB.a) + Math.abs(sB.m), m: 0 }
+      : { a: pt.s * M.a + sB.a, m: pt.s * M.m + sB.m };
+    const input = {
+      ...c,
+      // The moment's bending stress takes the point's sign; a stated stress is the point's own.
+      sigma_a: bend.a,
+      sigma_m: bend.m,
+      sigma_ax_a: F.a + sX.a,
+      sigma_ax_m: F.m + sX.m,
+      tau_a: T.a + tau.a,
+      tau_m: T.m + tau.m,
+    };
+    const eq = sec.rotating ? equivalentStresses(input) : pointEquivalentStresses(input);
+    return { sa: eq.sigma_a_eq.value, sm: eq.sigma_m_eq.value };
   });
-  return { sa: eq.sigma_a_eq.value, sm: eq.sigma_m_eq.value };
 }

@@ -5,8 +5,8 @@
  */
 import type { MethodNote } from '../computed';
 import { classicalFunctions } from './classicalFunctions';
-import type { ClassicalCriterion } from './loadLine';
 import { STATIC_FAILURE } from './solveFactor';
+import type { ClassicalCriterion } from './types';
 
 export const ASME_ELLIPTIC_SOURCE =
   "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-12, Table 6-8 (ASME-elliptic (n sigma_a/S_e)^2 + (n sigma_m/S_y)^2 = 1)";

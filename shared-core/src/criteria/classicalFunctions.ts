@@ -4,7 +4,7 @@
  * Haigh curve, with the input checks, the compressive-mean rule and the terms shown.
  */
 import { type Computed, computed, infinite, isFiniteNumber, type MethodNote, MPA } from '../computed';
-import type { ClassicalCriterion, StrengthSet } from './loadLine';
+import type { ClassicalCriterion, StrengthSet } from './types';
 
 export const COMPRESSIVE_MEAN_SOURCE =
   "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-12, discussion of Fig. 6-27: for a compressive midrange stress failure occurs when sigma_a = S_e";

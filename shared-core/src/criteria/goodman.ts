@@ -3,8 +3,8 @@
  * Compressive mean: the horizontal line `S_a = S` (Shigley, Fig. 6-27 discussion).
  */
 import { classicalFunctions } from './classicalFunctions';
-import type { ClassicalCriterion } from './loadLine';
 import { STATIC_FAILURE } from './solveFactor';
+import type { ClassicalCriterion } from './types';
 
 export const GOODMAN_SOURCE =
   "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-12, Table 6-6 (modified Goodman line S_a/S_e + S_m/S_ut = 1)";

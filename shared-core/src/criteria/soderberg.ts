@@ -4,8 +4,8 @@
  */
 import type { MethodNote } from '../computed';
 import { classicalFunctions } from './classicalFunctions';
-import type { ClassicalCriterion } from './loadLine';
 import { STATIC_FAILURE } from './solveFactor';
+import type { ClassicalCriterion } from './types';
 
 export const SODERBERG_SOURCE =
   "Budynas & Nisbett, Shigley's Mechanical Engineering Design, 10th ed., Sec. 6-12 (Soderberg line S_a/S_e + S_m/S_y = 1, 1/n = sigma_a/S_e + sigma_m/S_y)";

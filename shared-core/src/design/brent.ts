@@ -1,5 +1,7 @@
 /**
- * Brent's root finder on a bracket: inverse quadratic interpolation and the secant step
+ * Brent's root finder and Brent's minimiser, for design mode.
+ *
+ * The root finder works on a bracket: inverse quadratic interpolation and the secant step
  * where they make progress, bisection where they do not, so it converges whenever the
  * function changes sign on the bracket (even across a jump, which it then closes in on).
  *
@@ -134,5 +136,118 @@ export function brentRoot(
     b += Math.abs(d) > tol ? d : m > 0 ? tol : -tol;
     fb = call(b);
     if (!Number.isFinite(fb)) return { ok: false, reason: 'not-finite', evaluations };
+  }
+}
+
+export interface BrentMinOptions {
+  /** Absolute tolerance on x (default 1e-12). */
+  xAbsTol?: number;
+  /** Relative tolerance on x (default 1e-8, about the square root of the machine epsilon). */
+  xRelTol?: number;
+  /** Largest number of calls of `f` (default 60). */
+  maxEvaluations?: number;
+}
+
+export interface BrentMinOutcome {
+  /** The point of the smallest value found. */
+  x: number;
+  fx: number;
+  evaluations: number;
+  /** False when the evaluation budget ran out before the tolerance was reached. */
+  converged: boolean;
+}
+
+/**
+ * Finds a local minimum of `f` on [a, b]: golden-section steps, parabolic interpolation
+ * through the three best points where it is safe. It needs no derivative and no continuity
+ * (on a step it closes in on the step, on the lower side), and converges to a minimum of a
+ * unimodal function on the interval.
+ *
+ * The procedure `localmin` of R. P. Brent, "Algorithms for Minimization without
+ * Derivatives", Prentice-Hall 1973, chapter 5 (section 5.8); the same algorithm as `brent`
+ * in Press et al., "Numerical Recipes", 3rd ed., section 10.3.
+ *
+ * Pure: calls `f` at most `maxEvaluations` times; a non-finite value counts as larger than
+ * any finite one. Never throws.
+ */
+export function brentMinimize(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  options: BrentMinOptions = {},
+): BrentMinOutcome {
+  const maxEval = Math.max(1, options.maxEvaluations ?? 60);
+  const relTol = options.xRelTol ?? 1e-8;
+  const absTol = options.xAbsTol ?? 1e-12;
+  let evaluations = 0;
+  const call = (x: number) => {
+    evaluations++;
+    const y = f(x);
+    return Number.isFinite(y) ? y : Number.MAX_VALUE;
+  };
+  if (a > b) [a, b] = [b, a];
+  const golden = 0.5 * (3 - Math.sqrt(5));
+  let x = a + golden * (b - a);
+  let w = x;
+  let v = x;
+  let fx = call(x);
+  let fw = fx;
+  let fv = fx;
+  let d = 0;
+  let e = 0;
+  while (true) {
+    const m = 0.5 * (a + b);
+    const tol = relTol * Math.abs(x) + absTol;
+    const t2 = 2 * tol;
+    const done = Math.abs(x - m) <= t2 - 0.5 * (b - a);
+    if (done || evaluations >= maxEval) return { x, fx, evaluations, converged: done };
+    let p = 0;
+    let q = 0;
+    let r = 0;
+    if (Math.abs(e) > tol) {
+      // Parabola through x, w and v.
+      r = (x - w) * (fx - fv);
+      q = (x - v) * (fx - fw);
+      p = (x - v) * q - (x - w) * r;
+      q = 2 * (q - r);
+      if (q > 0) p = -p;
+      else q = -q;
+      r = e;
+      e = d;
+    }
+    if (Math.abs(p) < Math.abs(0.5 * q * r) && p > q * (a - x) && p < q * (b - x)) {
+      // Parabolic step, not too close to the ends.
+      d = p / q;
+      const u = x + d;
+      if (u - a < t2 || b - u < t2) d = x < m ? tol : -tol;
+    } else {
+      // Golden-section step into the larger part.
+      e = (x < m ? b : a) - x;
+      d = golden * e;
+    }
+    const u = x + (Math.abs(d) >= tol ? d : d > 0 ? tol : -tol);
+    const fu = call(u);
+    if (fu <= fx) {
+      if (u < x) b = x;
+      else a = x;
+      v = w;
+      fv = fw;
+      w = x;
+      fw = fx;
+      x = u;
+      fx = fu;
+    } else {
+      if (u < x) a = u;
+      else b = u;
+      if (fu <= fw || w === x) {
+        v = w;
+        fv = fw;
+        w = u;
+        fw = fu;
+      } else if (fu <= fv || v === x || v === w) {
+        v = u;
+        fv = fu;
+      }
+    }
   }
 }

@@ -12,10 +12,16 @@
  *     decade, for sign changes of (SYMBOL - target);
  *  2. closes in on each sign change with Brent's method (Brent 1973, ch. 4; Press et al.,
  *     Numerical Recipes, 3rd ed., 9.3);
- *  3. answers the smallest root in the range (the rule for several roots: the smallest
+ *  3. the target is met where |SYMBOL - target| <= SOLVE_TOLERANCE |target|: a step of the
+ *     result that straddles the target within it is a root; a larger step across the target
+ *     (a method's range boundary: the two ranges of kb in Shigley Eq. 6-20 at 51 mm, the knee
+ *     of the S-N line) is a jump, reported with the result on both sides and the value of the
+ *     check whose method changes range there;
+ *  4. answers the smallest root in the range (the rule for several roots: the smallest
  *     value of the dimension, i.e. the lightest section or the smallest load), with a
- *     warning that lists the others; no root is an error that names the range searched
- *     and the closest value reached.
+ *     warning that lists the others; no root is an error that names the range searched, the
+ *     jumps, and the closest value: the best local minima of |SYMBOL - target| on the scan
+ *     refined by Brent's minimiser (Brent 1973, ch. 5), the best of all evaluations made.
  *
  * At most `SOLVE_BUDGET` evaluations of the block. The answer is recorded as the value
  * NAME (origin 'computed', formula `solved: SYMBOL(NAME) = target`) of the evaluation at
@@ -23,7 +29,7 @@
  */
 import type { Term } from '../computed';
 import type { StatedInput } from '../language/checkContext';
-import type { CheckScopeEntry } from '../language/evaluateNote';
+import type { CheckScopeEntry } from '../language/checkScope';
 import { ExpressionError, evaluateExpression, rawFromSI, type Scope } from '../language/expressions';
 import type { BlockSource } from '../language/markdownBlocks';
 import {
@@ -37,10 +43,14 @@ import { INPUT_NAMES, nearest, RESULT_NAMES } from '../language/vocabulary';
 import { classify, DIM_LABEL, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import { formatValue } from '../units/format';
 import type { Unit } from '../units/mathInstance';
-import { brentRoot } from './brent';
+import { brentMinimize, brentRoot } from './brent';
 
 export const SOLVE_SOURCE =
   'bracketed root finding: scan of the physical range, then Brent\'s method (R. P. Brent, "Algorithms for Minimization without Derivatives", Prentice-Hall 1973, ch. 4; Press et al., "Numerical Recipes", 3rd ed., Sec. 9.3)';
+
+/** The source of a closest point when no root is found. */
+export const SOLVE_CLOSEST_SOURCE =
+  'closest point: Brent\'s minimiser of |SYMBOL - target| around the best points of the scan (R. P. Brent, "Algorithms for Minimization without Derivatives", Prentice-Hall 1973, ch. 5; Press et al., "Numerical Recipes", 3rd ed., Sec. 10.3)';
 
 /** Largest number of evaluations of the block for one solve (scan, Brent and the final one). */
 export const SOLVE_BUDGET = 200;
@@ -114,10 +124,33 @@ interface Trial {
   /** (SYMBOL - target) / |target|; null when the check gives no SYMBOL there. */
   g: number | null;
   symbolDisplay?: string;
+  /** SYMBOL's SI value (undefined when infinite). */
+  si?: number;
 }
 
 /** A value large enough to carry the sign of an infinite result into the root finder. */
 const INFINITE_G = 1e9;
+
+/**
+ * The target is met where |SYMBOL - target| <= SOLVE_TOLERANCE * |target| (|target| taken as 1
+ * when the target is 0): at most a tenth of the last digit of the 4-digit display. A step of the
+ * result across the target smaller than this is a root (e.g. the 2e-6 step of the inch form of
+ * Shigley Eq. 6-20 at 2 in); a larger one is a jump, reported with both sides.
+ */
+export const SOLVE_TOLERANCE = 1e-5;
+
+/** Local minima of |SYMBOL - target| refined when no root is found. */
+const MAX_REFINED = 3;
+/** Jumps whose cause is looked up (two more evaluations each). */
+const MAX_EXPLAINED = 2;
+/** Relative step of a value between the two sides of a jump that counts as its own step. */
+const JUMP_STEP = 1e-7;
+
+/** A sign change of (SYMBOL - target) that is not closed within the tolerance: its two sides. */
+interface Jump {
+  lo: Trial;
+  hi: Trial;
+}
 
 /**
  * Evaluates a block, solving its `solve:` statement when it has one. Without one this is
@@ -239,7 +272,17 @@ export function solveBlock(
   let evaluations = 0;
   let system: 'SI' | 'US' = 'SI';
   let symbolDim: DimKey = 'one';
+  const seen = new Map<number, Trial>();
+  let best: Trial | undefined;
   const trialAt = (x: number): Trial => {
+    const t = evaluate(x);
+    if (t.g !== null) {
+      seen.set(x, t);
+      if (!best || Math.abs(t.g) < Math.abs(best.g!)) best = t;
+    }
+    return t;
+  };
+  const evaluate = (x: number): Trial => {
     evaluations++;
     const entry = run(inject(x), true);
     system = entry.result.unitSystem;
@@ -278,7 +321,7 @@ export function solveBlock(
     symbolDim = v.dim;
     const scale = Math.abs(target) > 0 ? Math.abs(target) : 1;
     const g = v.infinite ? INFINITE_G : (v.si! - target) / scale;
-    return { x, g, symbolDisplay: v.display };
+    return { x, g, symbolDisplay: v.display, si: v.si ?? undefined };
   };
 
   const points = scanPoints(range);
@@ -317,50 +360,127 @@ export function solveBlock(
       st.kind === 'require' &&
       st.items.some((it) => it.symbol.text === symbol && (it.op === '<=' || it.op === '<')),
   );
+  const onSide = (g: number) => (wantsBelow ? g <= 0 : g >= 0);
   const roots: number[] = [...exact];
-  const jumps: number[] = [];
-  let left = SOLVE_BUDGET - evaluations - 1;
+  const jumps: Jump[] = [];
+  // Kept back for the final evaluation and for explaining up to MAX_EXPLAINED jumps.
+  let explained = 0;
+  const reserve = () => 1 + 2 * Math.max(0, MAX_EXPLAINED - explained);
+  const left = () => SOLVE_BUDGET - evaluations - reserve();
   for (let i = 0; i < brackets.length; i++) {
     const [a, b] = brackets[i];
-    const share = Math.max(4, Math.floor(left / (brackets.length - i)));
+    const share = Math.max(4, Math.floor(left() / (brackets.length - i)));
     const out = brentRoot((x) => trialAt(x).g ?? Number.NaN, a.x, b.x, {
       fa: a.g!,
       fb: b.g!,
       xRelTol: 1e-10,
-      maxEvaluations: Math.min(60, share, Math.max(0, left)),
+      maxEvaluations: Math.min(60, share, Math.max(0, left())),
     });
-    left -= out.evaluations;
     if (!out.ok) continue;
-    // Pick the end of the final bracket on the requirement's side of the target.
     const ends = [
       { x: out.x, g: out.fx },
       { x: out.other.x, g: out.other.fx },
     ];
-    const side = ends.find((e) => (wantsBelow ? e.g <= 0 : e.g >= 0)) ?? ends[0];
-    const residual = Math.min(Math.abs(out.fx), Math.abs(out.other.fx));
-    // A sign change without a small residual is a jump of the result (e.g. life to infinite at the knee).
-    if (residual > 1e-6) jumps.push(side.x);
-    else roots.push(side.x);
+    // The target is met where |SYMBOL - target| <= SOLVE_TOLERANCE |target|: a step of the
+    // result that straddles the target within that tolerance is a root like any other.
+    const met = ends.filter((e) => Math.abs(e.g) <= SOLVE_TOLERANCE);
+    if (met.length > 0) {
+      roots.push((met.find((e) => onSide(e.g)) ?? met[0]).x);
+      continue;
+    }
+    // A sign change that the tolerance does not close is a jump of the result (a range
+    // boundary of a method: the knee of the S-N line, a published fit's two ranges).
+    const [lo, hi] = ends[0].x <= ends[1].x ? [ends[0], ends[1]] : [ends[1], ends[0]];
+    jumps.push({
+      lo: seen.get(lo.x) ?? { x: lo.x, g: lo.g },
+      hi: seen.get(hi.x) ?? { x: hi.x, g: hi.g },
+    });
+  }
+
+  // No root from a sign change: the closest point is a real minimisation of |SYMBOL - target|,
+  // refined around the best local minima of the scan (Brent's localmin), not a scan point.
+  if (roots.length === 0) {
+    const mag = (t: Trial | undefined) =>
+      t === undefined || t.g === null ? Number.POSITIVE_INFINITY : Math.abs(t.g);
+    const localMinima: number[] = [];
+    for (let i = 0; i < trials.length; i++) {
+      const here = mag(trials[i]);
+      if (Number.isFinite(here) && here <= mag(trials[i - 1]) && here <= mag(trials[i + 1]))
+        localMinima.push(i);
+    }
+    localMinima.sort((i, j) => mag(trials[i]) - mag(trials[j]));
+    const refine = localMinima.slice(0, MAX_REFINED);
+    const toU = range.scale === 'log' ? Math.log : (x: number) => x;
+    const fromU = range.scale === 'log' ? Math.exp : (u: number) => u;
+    for (let k = 0; k < refine.length; k++) {
+      const i = refine[k];
+      const budget = Math.min(40, Math.floor(left() / (refine.length - k)));
+      if (budget < 4) break;
+      const lo = points[Math.max(0, i - 1)];
+      const hi = points[Math.min(points.length - 1, i + 1)];
+      brentMinimize(
+        (u) => {
+          const x = Math.min(range.hi, Math.max(range.lo, fromU(u)));
+          return mag(trialAt(x));
+        },
+        toU(lo),
+        toU(hi),
+        {
+          xRelTol: range.scale === 'log' ? 0 : 1e-9,
+          xAbsTol: range.scale === 'log' ? 1e-9 : 1e-12,
+          maxEvaluations: budget,
+        },
+      );
+    }
+    // The minimisation may find the target met where the result touches it without crossing.
+    if (best && best.g !== null && Math.abs(best.g) <= SOLVE_TOLERANCE) roots.push(best.x);
   }
   roots.sort((p, q) => p - q);
 
   const targetText = lastTarget !== undefined ? formatValue(lastTarget, symbolDim, system, 4) : s.expr.text;
+  const jumpTexts = jumps.map((j, k) => {
+    const side = (t: Trial) =>
+      t.si !== undefined ? formatValue(t.si, symbolDim, system, 6) : (t.symbolDisplay ?? '?');
+    const where = `${name} = ${fmt(j.hi.x)}, from ${symbol} = ${side(j.lo)} just below to ${side(j.hi)} just above`;
+    if (k >= MAX_EXPLAINED) return where;
+    explained++;
+    const why = explainJump(
+      run(inject(j.lo.x), true).result,
+      run(inject(j.hi.x), true).result,
+      name,
+      symbol,
+      system,
+    );
+    evaluations += 2;
+    return `${where}${why}`;
+  });
   if (roots.length === 0) {
-    const closest = defined.reduce((best, t) => (Math.abs(t.g!) < Math.abs(best.g!) ? t : best));
+    const closest = best ?? defined[0];
     const jumpText =
-      jumps.length > 0
-        ? `; \`${symbol}\` jumps across the target at ${name} = ${jumps.map(fmt).join(', ')} without reaching it`
-        : '';
+      jumpTexts.length > 0 ? `: \`${symbol}\` jumps across the target at ${jumpTexts.join('; and at ')}` : '';
+    // Say which side of a jump the closest point is on (the two sides print alike).
+    const atJump = jumps.find((j) => j.lo.x === closest.x || j.hi.x === closest.x);
+    const whichSide = atJump
+      ? atJump.lo.x === closest.x
+        ? ', just below the jump'
+        : ', just above the jump'
+      : '';
     diag(
       'error',
       'solve-no-root',
-      `no \`${name}\` from ${rangeText} gives ${symbol} = ${targetText}${jumpText}; the closest is ${symbol} = ${closest.symbolDisplay} at ${name} = ${fmt(closest.x)} (shown)`,
+      `no \`${name}\` from ${rangeText} gives ${symbol} = ${targetText}${jumpText}; the closest is ${symbol} = ${closest.symbolDisplay} at ${name} = ${fmt(closest.x)}${whichSide} (shown)`,
       s.whole,
     );
     const entry = run(inject(closest.x), false);
+    const notes = [
+      `searched ${name} from ${rangeText}; no root; the closest point found by minimising |${symbol} - target| (Brent's localmin)`,
+    ];
+    if (jumps.length > 0)
+      notes.push(`${symbol} jumps across the target at ${jumps.map((j) => fmt(j.hi.x)).join(', ')}`);
     record(entry.result, name, symbol, s, {
       formula: `closest: ${symbol}(${name}) = ${closest.symbolDisplay}, target ${targetText} not reached`,
-      notes: [`searched ${name} from ${rangeText}; no root`],
+      source: SOLVE_CLOSEST_SOURCE,
+      notes,
       evaluations: evaluations + 1,
     });
     return finish(entry, extra);
@@ -374,15 +494,55 @@ export function solveBlock(
       s.whole,
     );
   const entry = run(inject(answer), false);
-  const notes = [`searched ${name} from ${rangeText} (${points.length} scan points, then Brent's method)`];
+  const notes = [
+    `searched ${name} from ${rangeText} (${points.length} scan points, then Brent's method); target met within ${SOLVE_TOLERANCE} of it`,
+  ];
   if (roots.length > 1) notes.push(`other roots: ${roots.slice(1).map(fmt).join(', ')}`);
-  if (jumps.length > 0) notes.push(`${symbol} also jumps across the target at ${jumps.map(fmt).join(', ')}`);
+  if (jumps.length > 0)
+    notes.push(`${symbol} also jumps across the target at ${jumpTexts.join('; and at ')}`);
   record(entry.result, name, symbol, s, {
     formula: `solved: ${symbol}(${name}) = ${targetText}`,
     notes,
     evaluations: evaluations + 1,
   });
   return finish(entry, extra);
+}
+
+/**
+ * Why the result jumps between two evaluations on either side of a step: the first value of
+ * the check whose formula changes there (a method's range boundary, e.g. the two ranges of
+ * the size factor of Shigley Eq. 6-20 at 51 mm), else the first whose value steps.
+ */
+function explainJump(
+  below: CheckResult,
+  above: CheckResult,
+  name: string,
+  symbol: string,
+  system: 'SI' | 'US',
+): string {
+  const show = (v: Value) => (v.si !== null ? formatValue(v.si, v.dim, system, 6) : v.display);
+  const names = Object.keys(below.values).filter((n) => n !== name && n in above.values);
+  const changed = (n: string) => {
+    const a = below.values[n];
+    const b = above.values[n];
+    return (a.formula ?? '') !== (b.formula ?? '') || Boolean(a.infinite) !== Boolean(b.infinite);
+  };
+  const byFormula = names.filter((n) => n !== symbol && changed(n));
+  const cause = byFormula[0] ?? (changed(symbol) ? symbol : undefined);
+  if (cause) {
+    const a = below.values[cause];
+    const b = above.values[cause];
+    return `, where \`${cause}\` changes from \`${a.formula ?? a.display}\` (${show(a)}) to \`${b.formula ?? b.display}\` (${show(b)}), the boundary between two ranges of its method`;
+  }
+  const stepped = names.find((n) => {
+    const a = below.values[n].si;
+    const b = above.values[n].si;
+    if (n === symbol || a === null || b === null) return false;
+    return Math.abs(a - b) > JUMP_STEP * Math.max(Math.abs(a), Math.abs(b));
+  });
+  if (stepped)
+    return `, where \`${stepped}\` steps from ${show(below.values[stepped])} to ${show(above.values[stepped])}`;
+  return '';
 }
 
 /** A value of an evaluated check as a mathjs value, for the target expression (stated ones as written). */
@@ -400,13 +560,13 @@ function record(
   name: string,
   symbol: string,
   s: SolveStatement,
-  how: { formula: string; notes: string[]; evaluations: number },
+  how: { formula: string; notes: string[]; evaluations: number; source?: string },
 ): void {
   const v: Value | undefined = result.values[name];
   if (!v) return;
   v.origin = 'computed';
   v.formula = how.formula;
-  v.source = SOLVE_SOURCE;
+  v.source = how.source ?? SOLVE_SOURCE;
   const sym = result.values[symbol];
   v.inputs = sym ? [{ name: symbol, display: sym.display }] : [];
   const terms: Term[] = [{ name: 'evaluations of the check', value: how.evaluations, unit: '' }];

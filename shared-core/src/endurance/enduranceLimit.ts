@@ -7,7 +7,7 @@
  *   (from the wrought iron and steel data of Fig. 6-17).
  * Cast iron: J. Carvill, Mechanical Engineer's Data Handbook (Butterworth-Heinemann, 1993),
  *   Sec. 1.3.2: endurance limit = 0.45 x tensile strength up to 600 N/mm^2, 275 N/mm^2 above.
- * Aluminium and titanium: no endurance limit (the fatigue-notes contract); the caller uses
+ * Aluminium, titanium, copper and magnesium alloys: no endurance limit (the fatigue-notes contract); the caller uses
  *   a fatigue strength at a stated life instead, so the answer is null.
  */
 import { type Computed, computed, type MethodNote, MPA } from '../computed';
@@ -19,7 +19,14 @@ const SOURCE_CAST_IRON =
 
 /** Estimated rotating-beam endurance limit (Pa), or null for a class without an endurance limit. */
 export function rotatingBeamEndurance(cls: MaterialClass, Sut: number): Computed | null {
-  if (cls === 'aluminium' || cls === 'titanium') return null;
+  if (
+    cls === 'aluminium' ||
+    cls === 'aluminium-cast' ||
+    cls === 'titanium' ||
+    cls === 'copper' ||
+    cls === 'magnesium'
+  )
+    return null;
   const castIron = cls === 'cast-iron';
   const source = castIron ? SOURCE_CAST_IRON : SOURCE_STEEL;
   const formula = castIron

@@ -4,7 +4,8 @@
  * The limits are far above any hand-written check (the samples have blocks of 10 to 40
  * lines) and low enough that the largest block allowed evaluates in milliseconds.
  */
-import type { CheckScopeEntry } from './evaluateNote';
+import { defaultMethod } from '../methods/registry';
+import type { CheckScopeEntry } from './checkScope';
 import { MAX_EXPRESSION_LENGTH } from './expressions';
 import { type BlockSource, ID_PATTERN } from './markdownBlocks';
 import { type CheckResult, type Diagnostic, lineRange, range } from './types';
@@ -80,12 +81,12 @@ export function notEvaluated(
   };
   const result: CheckResult = {
     id,
-    method: 'stress-life',
+    method: defaultMethod(),
     range: range(block.openLine, 0, block.closeLine, 0),
     headerRange,
     insertLine: block.closed ? block.closeLine : block.closeLine + 1,
     status: 'error',
-    values: {},
+    values: Object.create(null),
     order: [],
     requirements: [],
     diagnostics: [diagnostic, ...(why.longLines ?? []).map((l) => longLine(l, id))],

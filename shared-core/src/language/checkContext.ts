@@ -18,10 +18,15 @@ export interface StatedInput {
 }
 
 export interface HistoryChunkReader {
-  /** Calls `onChunk` with the file's text in order; returns an error text instead when it cannot. */
+  /**
+   * Calls `onChunk` with the file in order, as its bytes (which the history reader decodes:
+   * UTF-8, UTF-16 with or without a byte-order mark) or as text already decoded; returns an
+   * error text instead when it cannot. A chunk may be cut anywhere and is not kept after
+   * the call returns.
+   */
   read(
     relativePath: string,
-    onChunk: (chunk: string) => void,
+    onChunk: (chunk: string | Uint8Array) => void,
   ): { ok: true } | { ok: false; code: string; message: string };
 }
 
@@ -30,10 +35,18 @@ const SURFACED = new Set(['criterion-domain', 'load-line']);
 const TOOL_INPUTS_SHOWN = 3;
 
 export class CheckContext {
-  readonly values: Record<string, Value> = {};
+  /** Without `Object.prototype` behind it: `values[name]` answers for the check's own values only. */
+  readonly values: Record<string, Value> = Object.create(null);
   readonly order: string[] = [];
   readonly diagnostics: Diagnostic[] = [];
   readonly used = new Set<string>();
+  /**
+   * Stated inputs read only while a chain that a stated value replaces was worked out (for the
+   * tool's own value beside it), with that stated value's name: they do not act.
+   */
+  readonly replacedReads = new Map<string, string>();
+  /** The stated value whose replaced chain is being worked out (see `replacedBy`). */
+  private replacing: string | null = null;
   spectrum: SpectrumStatement[] = [];
   /** Names of the block and `check.name` references, for expressions a method evaluates itself (spectrum levels). */
   scope?: Scope;
@@ -66,8 +79,57 @@ export class CheckContext {
   input(name: string): number | undefined {
     const s = this.stated.get(name);
     if (!s) return undefined;
-    this.used.add(name);
+    this.markRead(name);
     return s.q.si;
+  }
+
+  private markRead(name: string): void {
+    if (this.replacing === null) this.used.add(name);
+    else if (!this.replacedReads.has(name)) this.replacedReads.set(name, this.replacing);
+  }
+
+  /**
+   * Runs the chain that the stated value `name` replaces (a stated `Se` ends the Marin chain,
+   * a stated `Kt` the geometry fit ...), only for the tool's own value beside the stated one:
+   * the chain raises no diagnostic, the values it records are marked as not used, and the
+   * stated inputs it alone reads are marked so after the method (`markReplacedInputs`).
+   */
+  replacedBy<T>(name: string, run: () => T): T {
+    const outer = this.replacing;
+    this.replacing = outer ?? name;
+    try {
+      return run();
+    } finally {
+      this.replacing = outer;
+    }
+  }
+
+  /** Whether a replaced chain is being worked out (its diagnostics are dropped). */
+  get quiet(): boolean {
+    return this.replacing !== null;
+  }
+
+  /**
+   * Notes stated inputs that only a replaced chain would have read (they are not read at all);
+   * `why` says it when the reason is not a stated value (`by` is then only the chain's name).
+   */
+  replaced(by: string, names: readonly string[], why?: string): void {
+    for (const n of names)
+      if (this.stated.has(n) && !this.replacedReads.has(n)) {
+        this.replacedReads.set(n, by);
+        if (why) this.replacedWhy.set(n, why);
+      }
+  }
+
+  private readonly replacedWhy = new Map<string, string>();
+
+  /** After the method: a stated input that only replaced chains read is shown as not used. */
+  markReplacedInputs(): void {
+    for (const [name, by] of this.replacedReads) {
+      const v = this.values[name];
+      if (this.used.has(name) || !v || v.origin !== 'stated' || name === by) continue;
+      v.unused = this.replacedWhy.get(name) ?? `the stated ${by} replaces the chain it feeds`;
+    }
   }
 
   has(name: string): boolean {
@@ -79,6 +141,8 @@ export class CheckContext {
   }
 
   diag(severity: Severity, code: string, message: string, range?: Range, fixes?: QuickFix[]): void {
+    // A chain that a stated value replaces does not act: nothing it finds is the note's concern.
+    if (this.replacing !== null) return;
     const d: Diagnostic = { range: range ?? this.header, severity, code, message, check: this.id };
     if (fixes && fixes.length > 0) d.fixes = fixes;
     // One diagnostic per code and place.
@@ -122,6 +186,8 @@ export class CheckContext {
   }
 
   private put(v: Value): void {
+    if (this.replacing !== null && v.origin !== 'stated')
+      v.unused = `the stated ${this.replacing} replaces it`;
     if (!(v.name in this.values)) this.order.push(v.name);
     this.values[v.name] = v;
   }
@@ -170,7 +236,8 @@ export class CheckContext {
     const dim = opts.dim ?? this.dimOf(name, 'one');
     const stated = this.stated.get(name);
     const notes: string[] = [];
-    if (c?.notes)
+    // A stated value replaces the tool's own: the remarks of that computation are not the note's concern.
+    if (c?.notes && !stated)
       for (const n of c.notes) {
         // A criterion used outside its domain and a load line that cannot bound the factor
         // are engineering warnings whatever the method's own severity.
@@ -179,7 +246,7 @@ export class CheckContext {
         else this.diag(sev, n.code, `${name}: ${n.message}`, opts.range ?? this.rangeOf(name));
       }
     if (stated) {
-      this.used.add(name);
+      this.markRead(name);
       const v = this.values[name];
       if (v && c) {
         v.tool = this.toolAlternative(c, dim, inputs, opts.tool);
@@ -187,6 +254,8 @@ export class CheckContext {
       return stated.q.si;
     }
     if (!c) return null;
+    // A stated input of a value that acts acts too (the radius of a q worked out from a quietly read fit ...).
+    if (this.replacing === null) for (const n of inputs) if (this.stated.has(n)) this.used.add(n);
     if (!Number.isFinite(c.value)) {
       this.diag(
         'error',
@@ -259,7 +328,7 @@ export class CheckContext {
   library(name: string, si: number, source: string, range?: Range): number {
     const stated = this.stated.get(name);
     if (stated) {
-      this.used.add(name);
+      this.markRead(name);
       return stated.q.si;
     }
     const dim = this.dimOf(name, 'one');

@@ -1,41 +1,12 @@
 /**
- * Which results each view shows, by method: the one list that the code lens, the command
- * line's summary line, the hover's check summary, the inline hints' ranking, the summary
- * panel and the Markdown preview follow. The language server sends the names with every
- * check's summary, so that the extension holds no list of its own.
+ * Which results each view shows of a check, read from its method's registry entry
+ * (`methodViews`): the code lens, the command line's summary line, the hover's check
+ * summary, the inline hints' ranking, the summary panel and the Markdown preview follow
+ * it. The language server sends the names with every check's summary, so that the
+ * extension holds no list of its own.
  */
-import type { CheckResult, Method, Value } from './types';
-
-export interface ShownResults {
-  /** The results that headline a check in one line (code lens, `check` summary, hover), in order. */
-  headline: readonly string[];
-  /** The rows of a check's table under its block in the Markdown preview, in order. */
-  table: readonly string[];
-  /** The summary panel's life column: the first of these the check has. */
-  life: readonly string[];
-}
-
-export const SHOWN_RESULTS: Record<Method, ShownResults> = {
-  'stress-life': {
-    headline: ['n_f', 'n_y', 'N_f', 'S_f'],
-    table: ['n_f', 'n_y', 'N_f', 'S_f', 'Se', 'sigma_a_eq', 'sigma_m_eq'],
-    life: ['N_f'],
-  },
-  damage: {
-    headline: ['D', 'repeats', 'N_eq'],
-    table: ['D', 'repeats', 'N_eq', 'n_y'],
-    life: ['D', 'N_f'],
-  },
-  'crack-growth': {
-    headline: ['a_c', 'N_cg', 'N_insp'],
-    table: ['a_c', 'N_cg', 'N_insp'],
-    life: ['N_cg', 'N_f'],
-  },
-};
-
-function shownOf(c: Pick<CheckResult, 'method'>): ShownResults {
-  return SHOWN_RESULTS[c.method] ?? SHOWN_RESULTS['stress-life'];
-}
+import { methodViews } from '../methods/registry';
+import type { CheckResult, Value } from './types';
 
 /** Dimensions found by `solve:`: the answer the designer asked for comes first. */
 function solvedNames(c: Pick<CheckResult, 'values'>): string[] {
@@ -58,22 +29,22 @@ export function shownNames(c: Pick<CheckResult, 'method' | 'values'>): {
   table: string[];
   life: string | null;
 } {
-  const s = shownOf(c);
+  const v = methodViews(c.method);
   return {
-    headline: present(c, s.headline),
-    table: present(c, s.table),
-    life: s.life.find((n) => c.values[n]) ?? null,
+    headline: present(c, v.summary),
+    table: present(c, v.preview),
+    life: v.life.find((n) => c.values[n]) ?? null,
   };
 }
 
-/** The results that headline a check in one line (summary, code lens, hover), by method. */
+/** The results that headline a check in one line (summary, code lens, hover), as its method declares them. */
 export function headlineValues(c: CheckResult): Value[] {
   return shownNames(c).headline.map((n) => c.values[n]);
 }
 
 /** Place of a result in the check's headline (inline hints show these first); beyond it, last. */
 export function headlineRank(c: Pick<CheckResult, 'method'>, name: string): number {
-  const list = shownOf(c).headline;
+  const list = methodViews(c.method).summary;
   const i = list.indexOf(name);
   return i < 0 ? list.length : i;
 }

@@ -9,7 +9,14 @@ import remarkParse from 'remark-parse';
 import { unified } from 'unified';
 import { nestsTooDeep, scanFatigueFences } from './fenceScan';
 
-export const ID_PATTERN = /^[A-Za-z_][A-Za-z0-9_]*$/;
+/**
+ * A check id: a letter or `_`, then letters, digits and `_`; not a name that every
+ * JavaScript object has (`constructor`, `__proto__`, `toString` ...), which no table of a
+ * note may answer to (`reserved-name`, as for the names of a note).
+ */
+export const ID_PATTERN = new RegExp(
+  `^(?!(?:${Object.getOwnPropertyNames(Object.prototype).join('|')})$)[A-Za-z_][A-Za-z0-9_]*$`,
+);
 
 export interface SourceLine {
   /** 0-based line in the document. */

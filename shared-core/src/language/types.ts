@@ -79,6 +79,11 @@ export interface Value {
   notes?: string[];
   /** Why a default was taken (for the assumptions register). */
   assumption?: string;
+  /**
+   * Why the value does not act on the results, when a stated value replaces the chain it
+   * belongs to (e.g. `the stated Se replaces it` on ka ... kmisc): shown as "not used".
+   */
+  unused?: string;
 }
 
 export interface RequirementResult {
@@ -93,7 +98,8 @@ export interface RequirementResult {
 }
 
 export type CheckStatus = 'pass' | 'fail' | 'error' | 'unchecked';
-export type Method = 'stress-life' | 'damage' | 'crack-growth';
+/** The value of `method:`: one of the registry's methods (`methods/registry.ts`). */
+export type Method = string;
 
 export interface HaighData {
   /** All stresses in Pa. `S` is Se or the fatigue strength at the required life. */
@@ -121,7 +127,24 @@ export interface SnData {
   points: Array<{ label: string; sigma_ar: number; N: number | null; count?: number }>;
 }
 
-export interface CheckResult {
+/**
+ * The per-method records of a check (diagram data, tables). A method that needs a new one
+ * adds it in its own folder by augmenting this interface
+ * (`declare module '../../language/types' { interface MethodFields { ... } }`) and lists it
+ * in its module's `fields`.
+ */
+export interface MethodFields {
+  haigh?: HaighData;
+  sn?: SnData;
+  /** Extra per-method tables (damage contributors, crack size against cycles ...). */
+  tables?: Array<{ title: string; columns: string[]; rows: string[][] }>;
+  /** Crack size against cycles, for a crack-growth check (metres, cycles). */
+  crackCurve?: Array<[number, number]>;
+  /** Rainflow range-mean histogram, for a damage check with a history. */
+  histogram?: { rangeEdges: number[]; meanEdges: number[]; counts: number[][]; unit: string };
+}
+
+export interface CheckResult extends MethodFields {
   id: string | null;
   title?: string;
   method: Method;
@@ -139,14 +162,6 @@ export interface CheckResult {
   requirements: RequirementResult[];
   diagnostics: Diagnostic[];
   unitSystem: 'SI' | 'US';
-  haigh?: HaighData;
-  sn?: SnData;
-  /** Extra per-method tables (damage contributors, crack size against cycles ...). */
-  tables?: Array<{ title: string; columns: string[]; rows: string[][] }>;
-  /** Crack size against cycles, for a crack-growth check (metres, cycles). */
-  crackCurve?: Array<[number, number]>;
-  /** Rainflow range-mean histogram, for a damage check with a history. */
-  histogram?: { rangeEdges: number[]; meanEdges: number[]; counts: number[][]; unit: string };
 }
 
 export interface NoteResult {

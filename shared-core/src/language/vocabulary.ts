@@ -3,6 +3,7 @@
  * result names, and option keys with their values. Completion, hover, diagnostics and the
  * docs all read this one table.
  */
+import { FAMILIES, FAMILY_WORDS } from '../materials/families';
 import type { DimKey } from '../units/dimensions';
 
 export interface NameInfo {
@@ -23,6 +24,12 @@ export const INPUT_NAMES: Record<string, NameInfo> = ownWords({
   Sut: { dim: 'stress', meaning: 'ultimate tensile strength' },
   Sy: { dim: 'stress', meaning: 'tensile yield strength' },
   Se_prime: { dim: 'stress', meaning: 'endurance limit of the polished rotating-beam specimen' },
+  Sf_ref: {
+    dim: 'stress',
+    meaning:
+      'fatigue strength of the rotating-beam specimen at the reference life N_ref (no endurance limit)',
+  },
+  N_ref: { dim: 'one', meaning: 'reference life of Sf_ref, in cycles (e.g. 5e8 for aluminium tables)' },
   f: { dim: 'one', meaning: 'fatigue strength fraction at 10^3 cycles' },
   sigma_f_prime: { dim: 'stress', meaning: 'Basquin fatigue strength coefficient' },
   b_basquin: { dim: 'one', meaning: 'Basquin exponent (negative)' },
@@ -89,7 +96,6 @@ export const INPUT_NAMES: Record<string, NameInfo> = ownWords({
 export const RESULT_NAMES: Record<string, NameInfo> = ownWords({
   Se: { dim: 'stress', meaning: 'corrected endurance limit (Marin)' },
   S_ref: { dim: 'stress', meaning: 'corrected fatigue strength at the reference life (no endurance limit)' },
-  Sf_ref: { dim: 'stress', meaning: 'rotating-beam fatigue strength at the reference life (library)' },
   Sse: { dim: 'stress', meaning: 'corrected torsional endurance limit' },
   Ssu: { dim: 'stress', meaning: 'ultimate shear strength (0.67 Sut)' },
   sigma_a_eq: { dim: 'stress', meaning: 'von Mises equivalent alternating stress' },
@@ -126,6 +132,32 @@ export const RESULT_NAMES: Record<string, NameInfo> = ownWords({
   cycles_counted: { dim: 'one', meaning: 'cycles counted in one pass of the history' },
 });
 
+/**
+ * Results of one extreme fibre of a section bent by a moment (checks/criticalPoints.ts):
+ * `_pos` at +M c/I (the fibre a positive moment puts in tension), `_neg` at -M c/I. The plain
+ * names hold the governing fibre's value.
+ */
+export const POINT_RESULT_BASES = [
+  'sigma_a_eq',
+  'sigma_m_eq',
+  'sigma_max_eq',
+  'n_y',
+  'n_f',
+  'sigma_ar',
+  'N_f',
+  'D',
+] as const;
+const POINT_WORDS = {
+  pos: 'at the extreme fibre at +M c/I (a positive moment puts it in tension)',
+  neg: 'at the extreme fibre at -M c/I (a positive moment puts it in compression)',
+};
+for (const base of POINT_RESULT_BASES)
+  for (const [k, words] of Object.entries(POINT_WORDS))
+    RESULT_NAMES[`${base}_${k}`] = {
+      dim: RESULT_NAMES[base].dim,
+      meaning: `${RESULT_NAMES[base].meaning}, ${words}`,
+    };
+
 export interface OptionInfo {
   meaning: string;
   /** Allowed words with their meanings; absent for free text or library keys. */
@@ -136,6 +168,11 @@ export interface OptionInfo {
 const OPTION_TABLE: Record<string, OptionInfo> = {
   title: { meaning: 'title of the check (free text)' },
   material: { meaning: 'a key of the material library (strengths, class, source)' },
+  'material-family': {
+    meaning:
+      'what the material is when its strengths are stated without a library key: decides the endurance route and the notch-sensitivity data',
+    values: Object.fromEntries(FAMILY_WORDS.map((w) => [w, FAMILIES[w].meaning])),
+  },
   surface: {
     meaning: 'surface finish at the checked section, for the surface factor ka',
     values: {
@@ -212,12 +249,8 @@ const OPTION_TABLE: Record<string, OptionInfo> = {
   },
   method: {
     meaning: 'what the check computes',
-    values: {
-      'stress-life': 'safety factors and life from the S-N approach',
-      damage: 'Palmgren-Miner damage of a load history or spectrum',
-      'crack-growth': 'Paris-law crack growth life and inspection interval',
-    },
-    default: 'stress-life',
+    // One word per registered method, declared by the registry (methods/registry.ts).
+    values: {},
   },
   miner: {
     meaning: 'how cycles below the knee of the S-N line count',
@@ -264,6 +297,64 @@ export const OPTIONS: Record<string, OptionInfo> = ownWords(
     Object.entries(OPTION_TABLE).map(([k, v]) => [k, v.values ? { ...v, values: ownWords(v.values) } : v]),
   ),
 );
+
+/**
+ * Declares a word of `method:` (the registry of methods calls it for each method it lists,
+ * the first as the default); returns a function that withdraws it.
+ */
+export function declareMethodWord(name: string, meaning: string, isDefault: boolean): () => void {
+  const option = OPTIONS.method;
+  const values = option.values ?? ownWords({});
+  option.values = values;
+  values[name] = meaning;
+  if (isDefault) option.default = name;
+  return () => {
+    delete values[name];
+    if (option.default === name) option.default = undefined;
+  };
+}
+
+/** The words a method declares beside the shared ones (`MethodModule.words`). */
+export interface MethodWords {
+  inputs?: Record<string, NameInfo>;
+  results?: Record<string, NameInfo>;
+  options?: Record<string, OptionInfo>;
+  /** Of its inputs and results, those that must be strictly positive. */
+  positive?: readonly string[];
+}
+
+/**
+ * Declares a method's own words (the registry calls it for each method); returns a function
+ * that withdraws them. A word already declared by another table is left as it is.
+ */
+export function declareMethodWords(words: MethodWords | undefined): () => void {
+  if (!words) return () => {};
+  const added: Array<() => void> = [];
+  const put = <T>(table: Record<string, T>, entries: Record<string, T> | undefined) => {
+    for (const [k, v] of Object.entries(entries ?? {})) {
+      if (k in table) continue;
+      table[k] = v;
+      added.push(() => delete table[k]);
+    }
+  };
+  put(INPUT_NAMES, words.inputs);
+  put(RESULT_NAMES, words.results);
+  const options = Object.fromEntries(
+    Object.entries(words.options ?? {}).map(([k, v]) => [
+      k,
+      v.values ? { ...v, values: ownWords(v.values) } : v,
+    ]),
+  );
+  put(OPTIONS, options);
+  for (const n of words.positive ?? [])
+    if (!POSITIVE.has(n)) {
+      POSITIVE.add(n);
+      added.push(() => POSITIVE.delete(n));
+    }
+  return () => {
+    for (const undo of added.reverse()) undo();
+  };
+}
 
 export function nameInfo(name: string): NameInfo | undefined {
   return INPUT_NAMES[name] ?? RESULT_NAMES[name];
@@ -318,6 +409,10 @@ export const POSITIVE = new Set([
   'Sut',
   'Sy',
   'Se_prime',
+  'Se',
+  'Sf_ref',
+  'S_ref',
+  'N_ref',
   'sigma_f_prime',
   'f',
   'ka',

@@ -63,14 +63,23 @@ export function surfaceFactor(finish: SurfaceFinish, Sut: number): Computed {
     ]);
   }
   const sutMPa = Sut / MPA;
-  const ka = row.a * sutMPa ** row.b;
+  const fit = row.a * sutMPa ** row.b;
+  // A finish cannot be better than the polished specimen: the fit's value above 1 (low
+  // strengths) is capped at 1 (common practice, no source; conservative).
+  const ka = Math.min(fit, 1);
   const notes: MethodNote[] = [];
-  if (ka > 1) {
+  if (fit > 1) {
     notes.push({
       code: 'factor-above-one',
-      severity: 'hint',
-      message: `ka = ${ka.toFixed(3)} > 1: the Table 6-2 fit credits a ${finish} surface of so low a strength (${sutMPa.toFixed(0)} MPa) with more than the polished specimen; many designers take ka = 1 here.`,
+      severity: 'information',
+      message: `The Table 6-2 fit gives ${fit.toFixed(3)} > 1 for a ${finish} surface of so low a strength (${sutMPa.toFixed(0)} MPa): a finish cannot beat the polished specimen, so ka = 1 is used.`,
     });
   }
-  return computed(ka, FORMULA, SOURCE, [...terms, { name: 'Sut', value: sutMPa, unit: 'MPa' }], notes);
+  return computed(
+    ka,
+    fit > 1 ? `${FORMULA}, capped at 1` : FORMULA,
+    SOURCE,
+    [...terms, { name: 'Sut', value: sutMPa, unit: 'MPa' }],
+    notes,
+  );
 }

@@ -10,7 +10,20 @@
  * and a rotating-beam fatigue strength `Sf_ref` at `N_ref` cycles instead.
  */
 
-export type MaterialClass = 'steel' | 'stainless' | 'cast-iron' | 'aluminium' | 'titanium';
+/**
+ * The class of a material: one per family of `material-family:` (see `families.ts`). It decides
+ * the endurance estimate, whether an endurance limit exists, and the notch-sensitivity data.
+ * `aluminium` is the wrought aluminium alloys.
+ */
+export type MaterialClass =
+  | 'steel'
+  | 'stainless'
+  | 'cast-iron'
+  | 'aluminium'
+  | 'aluminium-cast'
+  | 'titanium'
+  | 'copper'
+  | 'magnesium';
 
 export interface Material {
   /** Kebab-case library key, e.g. `aisi-1045-cd`. */
@@ -35,6 +48,27 @@ export interface Material {
   K_IC?: number;
   /** Publication of the values. */
   source: string;
+  /**
+   * Cyclic stress-strain and strain-life constants (local strain approach), only where a
+   * publication gives them for this very condition; their own `source` says which numbers were
+   * looked up and which are from memory.
+   */
+  cyclic?: CyclicProperties;
+}
+
+/** Cyclic curve eps = sigma/E + (sigma/K')^(1/n') and strain-life curve eps_a = (sigma_f'/E)(2N)^b + eps_f'(2N)^c; SI. */
+export interface CyclicProperties {
+  /** Modulus of the strain-life data, Pa. */
+  E: number;
+  /** Cyclic strength coefficient K' (H' in Dowling), Pa. */
+  K_prime: number;
+  n_prime: number;
+  /** Fatigue strength coefficient, Pa. */
+  sigma_f_prime: number;
+  b: number;
+  eps_f_prime: number;
+  c: number;
+  source: string;
 }
 
 const MPa = 1e6;
@@ -50,7 +84,13 @@ const EFUNDA_4140 = 'eFunda alloy steel data, AISI 4140 oil quenched (fine grain
 const AA_TYPICAL =
   'Aluminum Association typical properties (fatigue endurance limit at 5e8 cycles, R.R. Moore rotating beam; E average of tension and compression), as tabulated in Kutz, Handbook of Materials Selection, Ch. 4 Table 5 and in the AA typical-property table reproduced by Aerodynamic Metals';
 
+const DOWLING_9_1 =
+  "Dowling, Mechanical Behavior of Materials, 4th ed., Pearson 2013, Table 9.1 (yield, ultimate, sigma_f', b; tests at zero mean stress on unnotched axial specimens)";
+const DOWLING_14_1_MEMORY =
+  "Dowling, Mechanical Behavior of Materials, 4th ed., Table 14.1 (E, eps_f', c, H' = K', n'; from memory, not looked up)";
+
 function material(m: Material): Material {
+  if (m.cyclic) Object.freeze(m.cyclic);
   return Object.freeze(m);
 }
 
@@ -178,6 +218,49 @@ export const MATERIALS: readonly Material[] = Object.freeze([
     enduranceLimit: true,
     source:
       'ASM / MatWeb data sheet "AISI 4340 Steel, oil quenched 800 degC, 650 degC temper, 50 mm round" (931 / 834 MPa, E 205 GPa typical for steel)',
+  }),
+  // Steels with published cyclic and strain-life constants (one tested heat each, typical values).
+  material({
+    key: 'aisi-4340-aircraft',
+    name: 'AISI 4340 Ni-Cr-Mo alloy steel',
+    class: 'steel',
+    condition: 'aircraft quality, quenched and tempered',
+    Sut: 1172 * MPa,
+    Sy: 1103 * MPa,
+    E: 207 * GPa,
+    enduranceLimit: true,
+    source: `${DOWLING_9_1}: AISI 4340 (aircraft quality) 1103 / 1172 MPa; E ${DOWLING_14_1_MEMORY}`,
+    cyclic: {
+      E: 207 * GPa,
+      K_prime: 1655 * MPa,
+      n_prime: 0.131,
+      sigma_f_prime: 1758 * MPa,
+      b: -0.0977,
+      eps_f_prime: 2.12,
+      c: -0.774,
+      source: `sigma_f' = 1758 MPa, b = -0.0977: ${DOWLING_9_1}; E = 207 GPa, eps_f' = 2.12, c = -0.774, K' = 1655 MPa, n' = 0.131: ${DOWLING_14_1_MEMORY}`,
+    },
+  }),
+  material({
+    key: 'rqc-100',
+    name: 'RQC-100 quenched and tempered steel plate',
+    class: 'steel',
+    condition: 'roller quenched and tempered',
+    Sut: 758 * MPa,
+    Sy: 683 * MPa,
+    E: 200 * GPa,
+    enduranceLimit: true,
+    source: `${DOWLING_9_1}: RQC-100 (roller Q & T) 683 / 758 MPa; E ${DOWLING_14_1_MEMORY}`,
+    cyclic: {
+      E: 200 * GPa,
+      K_prime: 903 * MPa,
+      n_prime: 0.0905,
+      sigma_f_prime: 938 * MPa,
+      b: -0.0648,
+      eps_f_prime: 1.38,
+      c: -0.704,
+      source: `sigma_f' = 938 MPa, b = -0.0648: ${DOWLING_9_1}; E = 200 GPa, eps_f' = 1.38, c = -0.704, K' = 903 MPa, n' = 0.0905: ${DOWLING_14_1_MEMORY}`,
+    },
   }),
   // Structural steels (minimum specified values).
   material({

@@ -10,10 +10,15 @@
  * Coefficients read from the public transcription of Table 17.1 at eng-calculations.com
  * (explicit signs); checked in the tests against independent chart tables (Carvill).
  *
+ * The two ranges meet at h/r = 2 with a step of up to about 0.1 % of Kt; the curves of the
+ * source are continuous, so the pieces are joined there, never below the published piece of
+ * the range that holds h/r (see `fitJoin.ts`).
+ *
  * Out-of-range h/r is treated as in `shoulderFillet.ts`: clamped below (conservative),
  * extrapolated above but never below the value at the upper limit; both with `fit-range`.
  */
 import { type Computed, computed, isFiniteNumber, type MethodNote, type Term } from '../computed';
+import { joinAtBoundary, liftText } from './fitJoin';
 import type { ShaftLoad } from './shoulderFillet';
 
 type CoefRow = readonly [number, number, number];
@@ -113,6 +118,7 @@ export function grooveKt(load: ShaftLoad, D: number, d: number, r: number): Comp
   const t = (2 * h) / D;
   let xEval = x;
   let res: { kt: number; c: number[] };
+  let join: { lift: number; piece: 'lower' | 'upper' } | undefined;
   if (x < LO) {
     xEval = LO;
     res = evalFit(fit.low, LO, t);
@@ -131,7 +137,14 @@ export function grooveKt(load: ShaftLoad, D: number, d: number, r: number): Comp
       message: `h/r = ${x.toPrecision(3)} is above the fit range ${LO}..${HI}; the fit is extrapolated (not below its value at h/r = ${HI}).`,
     });
   } else {
-    res = evalFit(x <= SPLIT ? fit.low : fit.high, x, t);
+    const j = joinAtBoundary(
+      x,
+      SPLIT,
+      (u) => evalFit(fit.low, u, t),
+      (u) => evalFit(fit.high, u, t),
+    );
+    res = j;
+    if (j.lift > 0) join = { lift: j.lift, piece: j.piece };
   }
   let kt = res.kt;
   if (!isFiniteNumber(kt)) {
@@ -156,5 +169,10 @@ export function grooveKt(load: ShaftLoad, D: number, d: number, r: number): Comp
   res.c.forEach((ci, i) => {
     terms.push({ name: `C${i + 1}`, value: ci, unit: '' });
   });
-  return computed(kt, formula, SOURCE, terms, notes);
+  let shown = formula;
+  if (join) {
+    terms.push({ name: 'L w (join of the h/r ranges)', value: join.lift, unit: '' });
+    shown = formula.replace('(2h/D)^3,', `(2h/D)^3 ${liftText(SPLIT, join.piece)},`);
+  }
+  return computed(kt, shown, SOURCE, terms, notes);
 }

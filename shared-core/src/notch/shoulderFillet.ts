@@ -11,6 +11,10 @@
  * fillets" pages with explicit signs for tension and torsion; several public code bases quoting
  * the bending set, all agreeing on the values used here).
  *
+ * Bending and tension have two published h/r ranges that meet at h/r = 2 with a step of up
+ * to about 1 % of Kt; the charts are continuous, so the pieces are joined there, never below
+ * the published piece of the range that holds h/r (see `fitJoin.ts`).
+ *
  * Outside the fit's h/r range the function still answers, with a `fit-range` note:
  * - h/r below the range (a blunter fillet than the charts cover): h/r is clamped to the lower
  *   limit. Kt falls as r grows, so the value at the limit is an upper bound (conservative).
@@ -18,6 +22,7 @@
  *   below its value at the upper limit, since Kt cannot fall as the fillet gets sharper.
  */
 import { type Computed, computed, isFiniteNumber, type MethodNote, type Term } from '../computed';
+import { type Joined, joinAtBoundary, liftText } from './fitJoin';
 
 export type ShaftLoad = 'bending' | 'torsion' | 'axial';
 
@@ -107,9 +112,23 @@ function evalFit(range: FitRange, x: number, t: number): { kt: number; c: number
   return { kt: c[0] + c[1] * t + c[2] * t * t + c[3] * t * t * t, c };
 }
 
-function rangeFor(ranges: readonly FitRange[], x: number): FitRange {
-  for (const rg of ranges) if (x <= rg.hi) return rg;
-  return ranges[ranges.length - 1];
+/**
+ * The fit inside its h/r range: the pieces on either side of the nearest boundary between two
+ * ranges, joined there continuously (`fitJoin.ts`); a single range as published.
+ */
+function evalInRange(ranges: readonly FitRange[], x: number, t: number): Joined & { boundary?: number } {
+  if (ranges.length === 1) return { ...evalFit(ranges[0], x, t), lift: 0, piece: 'lower' };
+  let k = 0;
+  for (let i = 1; i + 1 < ranges.length; i++)
+    if (Math.abs(Math.log(x / ranges[i].hi)) < Math.abs(Math.log(x / ranges[k].hi))) k = i;
+  const boundary = ranges[k].hi;
+  const j = joinAtBoundary(
+    x,
+    boundary,
+    (u) => evalFit(ranges[k], u, t),
+    (u) => evalFit(ranges[k + 1], u, t),
+  );
+  return { ...j, boundary };
 }
 
 /** Kt of a shoulder fillet on a stepped round shaft (D > d, fillet radius r; SI lengths). */
@@ -144,6 +163,7 @@ export function shoulderFilletKt(load: ShaftLoad, D: number, d: number, r: numbe
   let xEval = x;
   let kt: number;
   let c: number[];
+  let join: { lift: number; boundary: number; piece: 'lower' | 'upper' } | undefined;
   if (x < lo) {
     xEval = lo;
     ({ kt, c } = evalFit(ranges[0], lo, t));
@@ -164,7 +184,10 @@ export function shoulderFilletKt(load: ShaftLoad, D: number, d: number, r: numbe
       message: `h/r = ${x.toPrecision(3)} is above the fit range ${lo}..${hi}; the fit is extrapolated (not below its value at h/r = ${hi}). Sharp fillet: check the drawing or state ${sym}.`,
     });
   } else {
-    ({ kt, c } = evalFit(rangeFor(ranges, x), x, t));
+    const inRange = evalInRange(ranges, x, t);
+    ({ kt, c } = inRange);
+    if (inRange.lift > 0 && inRange.boundary !== undefined)
+      join = { lift: inRange.lift, boundary: inRange.boundary, piece: inRange.piece };
   }
   if (!isFiniteNumber(kt)) {
     kt = 1;
@@ -188,5 +211,10 @@ export function shoulderFilletKt(load: ShaftLoad, D: number, d: number, r: numbe
   c.forEach((ci, i) => {
     terms.push({ name: `C${i + 1}`, value: ci, unit: '' });
   });
-  return computed(kt, formula, SOURCE, terms, notes);
+  let shown = formula;
+  if (join) {
+    terms.push({ name: 'L w (join of the h/r ranges)', value: join.lift, unit: '' });
+    shown = formula.replace('(2h/D)^3,', `(2h/D)^3 ${liftText(join.boundary, join.piece)},`);
+  }
+  return computed(kt, shown, SOURCE, terms, notes);
 }

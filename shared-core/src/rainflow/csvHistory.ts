@@ -1,12 +1,20 @@
 /**
  * Incremental reader of load histories written by data loggers as CSV text. Pure: it gets
- * the text in chunks through `feed` (any chunk boundaries, even inside a line) and emits one
- * number per data row through `onValue`, so memory does not grow with the file. The server
- * reads the file in chunks and feeds it; nothing here touches a file system.
+ * the file in chunks through `feed` (its bytes, or its text; any chunk boundaries, even
+ * inside a character or a line) and emits one number per data row through `onValue`, so
+ * memory does not grow with the file. The server reads the file in chunks and feeds it;
+ * nothing here touches a file system. Work is linear in the file's size whatever its line
+ * structure: each character is looked at a bounded number of times, and at most
+ * `MAX_HISTORY_LINE` characters of a line are kept.
  *
  * The rules (common practice of logger files, no source):
- * - Lines end with LF or CRLF; a UTF-8 byte order mark at the start is dropped. Lines that
- *   start with `#` are comments. Blank lines are skipped and reported once (information).
+ * - Bytes are decoded as `HistoryDecoder` says: UTF-8, or UTF-16 LE or BE with or without a
+ *   byte-order mark (the mark is dropped); an encoding other than plain UTF-8 is named in
+ *   the information `csv-column`. Text fed as text may start with U+FEFF, which is dropped.
+ * - Lines end with LF, CRLF or a lone CR. A line longer than `MAX_HISTORY_LINE` (2^20)
+ *   characters is an error `history-line-too-long` and is skipped like a row without a
+ *   number. Lines that start with `#` are comments. Blank lines are skipped and reported
+ *   once (information).
  * - Delimiter, from the first non-blank, non-comment line: tab if it has a tab, else `;`,
  *   else `,`, else runs of spaces when it has several space-separated fields, else a single
  *   column. With `;`, tab, spaces or a single column, a comma inside a number is a decimal
@@ -25,10 +33,15 @@
  *   (information `csv-column`).
  * - A column that does not exist is an error listing the available columns; the reader
  *   then stops (`fatal`). A data row whose value is not a number (or is missing) is an
- *   error with its line number and is skipped; the first 100 are listed one by one, the
- *   rest summed up in one issue at `end()`.
+ *   error `csv-non-numeric` with its line number; one whose value is a number that is not
+ *   finite (`1e309` overflows; `nan`, `inf`, `Infinity`) is an error `history-non-finite`.
+ *   Such rows are skipped and counted in `badRowCount`; the first 100 are listed one by one,
+ *   the rest summed up in one issue at `end()`. A history with such a row must not be used
+ *   for a result: the lost sample may be its largest load.
  * - Fewer than three numbers in all is an error at `end()` (`history-too-few-points`).
  */
+import { encodingName, HistoryDecoder, type HistoryEncoding } from './historyDecoder';
+
 export interface HistoryIssue {
   /** 1-based line in the file (0 when the issue is about the whole file). */
   line: number;
@@ -54,19 +67,85 @@ export interface HistoryCsvOptions {
   maxRowReports?: number;
 }
 
-const NUMBER_RE = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+/** Longest line kept (characters); a longer one is an error and is skipped, unread. */
+export const MAX_HISTORY_LINE = 1 << 20;
+const MAX_LINE = MAX_HISTORY_LINE;
+/** Columns listed by name in the message of a missing column. */
+const COLUMNS_LISTED = 20;
 const TIME_EXACT_RE = /^(?:t|s|ms|sec|secs|seconds)$/;
 const TIME_PREFIX_RE = /^(?:time|zeit|temps|tiempo|timestamp|date|datetime|elapsed)(?:$|[\s_\-./:])/;
-const UNIT_SUFFIX_RE = /\s*[[(][^\])]*[\])]\s*$/;
+/** Words loggers write for a lost or saturated sample. */
+const NON_FINITE_WORD_RE = /^"?[+-]?(?:nan|inf|infinity|1\.#inf|1\.#ind|1\.#qnan)"?$/i;
 const TIME_SNIFF_ROWS = 16;
 
-/** Parses one field as a number: NaN when it is not one. */
+/** The characters `String.prototype.trim` removes (ECMAScript WhiteSpace and LineTerminator). */
+function isTrimSpace(c: number): boolean {
+  if (c <= 32) return c === 32 || (c >= 9 && c <= 13);
+  if (c < 0xa0) return false;
+  return (
+    c === 0xa0 ||
+    c === 0x1680 ||
+    (c >= 0x2000 && c <= 0x200a) ||
+    c === 0x2028 ||
+    c === 0x2029 ||
+    c === 0x202f ||
+    c === 0x205f ||
+    c === 0x3000 ||
+    c === 0xfeff
+  );
+}
+
+const isDigit = (c: number) => c >= 48 && c <= 57;
+
+/**
+ * Parses one field as a number: NaN when it is not one. The field, trimmed and without
+ * surrounding double quotes, must be `[+-]digits[.digits][e[+-]digits]` or
+ * `[+-].digits[e[+-]digits]` (with a decimal comma allowed for the point when
+ * `decimalComma`); the value is JavaScript's `Number` of that text (so `1e309` is Infinity,
+ * which the reader reports). One pass over the characters, linear in the field.
+ */
 export function parseHistoryNumber(raw: string, decimalComma: boolean): number {
-  let s = raw.trim();
-  if (s.length >= 2 && s.charCodeAt(0) === 34 && s.charCodeAt(s.length - 1) === 34) s = s.slice(1, -1).trim();
-  if (decimalComma && s.indexOf(',') >= 0) s = s.replace(',', '.');
-  if (!NUMBER_RE.test(s)) return Number.NaN;
-  return Number(s);
+  let a = 0;
+  let b = raw.length;
+  while (a < b && isTrimSpace(raw.charCodeAt(a))) a++;
+  while (b > a && isTrimSpace(raw.charCodeAt(b - 1))) b--;
+  if (b - a >= 2 && raw.charCodeAt(a) === 34 && raw.charCodeAt(b - 1) === 34) {
+    a++;
+    b--;
+    while (a < b && isTrimSpace(raw.charCodeAt(a))) a++;
+    while (b > a && isTrimSpace(raw.charCodeAt(b - 1))) b--;
+  }
+  let i = a;
+  let c = raw.charCodeAt(i);
+  if (c === 43 || c === 45) c = raw.charCodeAt(++i); // + -
+  let digits = 0;
+  while (i < b && isDigit(c)) {
+    digits++;
+    c = raw.charCodeAt(++i);
+  }
+  let comma = -1;
+  if (i < b && (c === 46 || (decimalComma && c === 44))) {
+    if (c === 44) comma = i;
+    c = raw.charCodeAt(++i);
+    while (i < b && isDigit(c)) {
+      digits++;
+      c = raw.charCodeAt(++i);
+    }
+  }
+  if (digits === 0) return Number.NaN;
+  if (i < b && (c === 101 || c === 69)) {
+    c = raw.charCodeAt(++i);
+    if (i < b && (c === 43 || c === 45)) c = raw.charCodeAt(++i);
+    let exp = 0;
+    while (i < b && isDigit(c)) {
+      exp++;
+      c = raw.charCodeAt(++i);
+    }
+    if (exp === 0) return Number.NaN;
+  }
+  if (i !== b) return Number.NaN;
+  const text = a === 0 && b === raw.length ? raw : raw.slice(a, b);
+  return Number(comma < 0 ? text : `${text.slice(0, comma - a)}.${text.slice(comma - a + 1)}`);
 }
 
 /** True for a header name that names a time column (see the rules above). */
@@ -76,7 +155,28 @@ export function isTimeColumnName(name: string): boolean {
 }
 
 function normaliseName(name: string): string {
-  return unquote(name).replace(UNIT_SUFFIX_RE, '').trim().toLowerCase();
+  return dropUnitSuffix(unquote(name)).trim().toLowerCase();
+}
+
+/**
+ * `F [kN]` -> `F`, `M (N*m)` -> `M`: drops a bracketed unit at the end, from the first `[` or
+ * `(` after the last closing bracket before it (a scan, linear in the name).
+ */
+function dropUnitSuffix(name: string): string {
+  const t = name.trimEnd();
+  const last = t.charCodeAt(t.length - 1);
+  if (last !== 93 && last !== 41) return t; // ] )
+  const body = t.slice(0, -1);
+  const after = Math.max(body.lastIndexOf(']'), body.lastIndexOf(')')) + 1;
+  let open = -1;
+  for (let i = after; i < body.length; i++) {
+    const c = body.charCodeAt(i);
+    if (c === 91 || c === 40) {
+      open = i;
+      break;
+    }
+  }
+  return open < 0 ? t : t.slice(0, open);
 }
 
 function unquote(s: string): string {
@@ -154,14 +254,28 @@ export class HistoryCsvReader {
   valueCount = 0;
   /** Lines seen. */
   lineCount = 0;
-  /** Rows skipped because their value was not a number. */
+  /** Rows skipped because their value was not a finite number (words, `nan`, `inf`, `1e309`). */
   badRowCount = 0;
+  /** Of those, the rows whose value is a non-finite number (`nan`, `inf`, an overflow like `1e309`). */
+  nonFiniteRowCount = 0;
   blankLineCount = 0;
+  /**
+   * Characters looked at so far (line-end searches, pieces kept, lines read): a measure of
+   * the work, which tests hold linear in the size of the input whatever its line structure.
+   */
+  steps = 0;
 
   private readonly opts: HistoryCsvOptions;
   private readonly maxRowReports: number;
   private phase: Phase = 'start';
-  private pending = '';
+  /** Pieces of the line not yet ended, and their length (counted on past `MAX_LINE`). */
+  private parts: string[] = [];
+  private partLength = 0;
+  private overlong = false;
+  private overlongHead = '';
+  /** The last piece ended with a CR: an LF at the start of the next one belongs to it. */
+  private afterCR = false;
+  private decoder?: HistoryDecoder;
   private firstChunk = true;
   private firstBlankLine = 0;
   private fieldCount = 0;
@@ -173,41 +287,129 @@ export class HistoryCsvReader {
     this.maxRowReports = opts.maxRowReports ?? 100;
   }
 
-  /** Feeds the next piece of the file's text. */
-  feed(chunk: string): void {
+  /**
+   * Feeds the next piece of the file: its bytes (decoded here, see `HistoryDecoder`) or,
+   * when the caller has decoded it, its text. Work and memory are linear in the piece:
+   * a line is looked at once, when it ends, and at most `MAX_LINE` characters of it are kept.
+   */
+  feed(chunk: string | Uint8Array): void {
     if (this.ended || this.fatal) return;
-    let text = chunk;
-    if (this.firstChunk && text.length > 0) {
-      this.firstChunk = false;
-      if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
+    if (typeof chunk === 'string') {
+      this.feedText(chunk);
+      return;
     }
-    if (this.pending.length > 0) text = this.pending + text;
+    if (this.decoder === undefined) this.decoder = new HistoryDecoder();
+    this.feedText(this.decoder.write(chunk));
+  }
+
+  /** Characters of the current, unfinished line that are kept (at most `MAX_HISTORY_LINE`). */
+  get heldCharacters(): number {
+    return this.overlong ? 0 : this.partLength;
+  }
+
+  /** The encoding of the bytes fed (undefined when the caller fed text). */
+  get encoding(): HistoryEncoding | undefined {
+    return this.decoder?.encoding;
+  }
+
+  private feedText(chunk: string): void {
+    if (this.fatal || chunk.length === 0) return;
+    let text = chunk;
+    if (this.firstChunk) {
+      this.firstChunk = false;
+      if (this.decoder === undefined && text.charCodeAt(0) === 0xfeff) text = text.slice(1);
+    }
     let start = 0;
-    for (;;) {
-      const nl = text.indexOf('\n', start);
-      if (nl < 0) break;
-      let end = nl;
-      if (end > start && text.charCodeAt(end - 1) === 13) end--;
-      this.line(text.slice(start, end));
+    if (this.afterCR) {
+      // CR LF split between two pieces: the LF ends no second line.
+      this.afterCR = false;
+      if (text.charCodeAt(0) === 10) start = 1;
+    }
+    // Line ends: LF, CRLF or a lone CR. The next of each is searched once and kept until passed.
+    let lf = this.find(text, '\n', start);
+    let cr = this.find(text, '\r', start);
+    while (lf >= 0 || cr >= 0) {
+      let end: number;
+      let next: number;
+      if (cr >= 0 && (lf < 0 || cr < lf)) {
+        end = cr;
+        if (cr + 1 < text.length) next = text.charCodeAt(cr + 1) === 10 ? cr + 2 : cr + 1;
+        else {
+          next = cr + 1;
+          this.afterCR = true;
+        }
+      } else {
+        end = lf;
+        next = lf + 1;
+      }
+      this.endLine(text, start, end);
       if (this.fatal) {
-        this.pending = '';
+        this.parts = [];
         return;
       }
-      start = nl + 1;
+      start = next;
+      if (lf >= 0 && lf < start) lf = this.find(text, '\n', start);
+      if (cr >= 0 && cr < start) cr = this.find(text, '\r', start);
     }
-    this.pending = start < text.length ? text.slice(start) : '';
+    if (start < text.length) this.append(text, start, text.length);
+  }
+
+  /** `text.indexOf(ch, from)`, counting the characters it looks at in `steps`. */
+  private find(text: string, ch: string, from: number): number {
+    const i = text.indexOf(ch, from);
+    this.steps += (i < 0 ? text.length : i + 1) - from;
+    return i;
+  }
+
+  /** Keeps a piece of the line not yet ended, up to `MAX_LINE` characters in all. */
+  private append(text: string, from: number, to: number): void {
+    const n = to - from;
+    if (this.partLength + n > MAX_LINE) {
+      if (!this.overlong) {
+        this.overlong = true;
+        this.overlongHead = (this.parts.join('') + text.slice(from, from + 40)).slice(0, 40);
+        this.parts = [];
+      }
+      this.partLength += n;
+      return;
+    }
+    this.parts.push(from === 0 && to === text.length ? text : text.slice(from, to));
+    this.partLength += n;
+    this.steps += n;
+  }
+
+  /** A line ends at `text[to]`: hands it on whole, or reports it when it is too long. */
+  private endLine(text: string, from: number, to: number): void {
+    let raw: string;
+    if (this.partLength === 0) {
+      if (to - from > MAX_LINE) {
+        this.overlong = true;
+        this.overlongHead = text.slice(from, from + 40);
+        this.partLength = to - from;
+      }
+      raw = this.overlong ? '' : text.slice(from, to);
+    } else {
+      this.append(text, from, to);
+      raw = this.overlong ? '' : this.parts.join('');
+      this.steps += raw.length;
+    }
+    this.parts = [];
+    const length = this.partLength;
+    this.partLength = 0;
+    if (this.overlong) {
+      this.overlong = false;
+      this.longLine(length);
+      return;
+    }
+    this.line(raw);
   }
 
   /** Ends the input: the last line without a newline, deferred decisions and summaries. */
   end(): void {
     if (this.ended) return;
+    if (!this.fatal && this.decoder !== undefined) this.feedText(this.decoder.end());
     this.ended = true;
-    if (!this.fatal && this.pending.length > 0) {
-      let last = this.pending;
-      if (last.charCodeAt(last.length - 1) === 13) last = last.slice(0, -1);
-      this.pending = '';
-      this.line(last);
-    }
+    if (!this.fatal && (this.partLength > 0 || this.overlong)) this.endLine('', 0, 0);
     if (!this.fatal && this.phase === 'sniff') this.decideSniffedColumn();
     if (this.blankLineCount > 0) {
       this.report(
@@ -223,7 +425,7 @@ export class HistoryCsvReader {
         0,
         'csv-non-numeric',
         'error',
-        `${more} more row${more === 1 ? '' : 's'} without a number in ${this.columnLabel()} skipped (${this.badRowCount} in all).`,
+        `${more} more row${more === 1 ? '' : 's'} without a finite number in ${this.columnLabel()} skipped (${this.badRowCount} in all).`,
       );
     }
     if (!this.fatal && this.valueCount < 3) {
@@ -238,6 +440,8 @@ export class HistoryCsvReader {
 
   private line(raw: string): void {
     const no = ++this.lineCount;
+    // Every rule below looks at the line a bounded number of times: count it once.
+    this.steps += raw.length + 1;
     const phase = this.phase;
     if (phase === 'data') {
       this.dataRow(raw, no);
@@ -331,17 +535,25 @@ export class HistoryCsvReader {
     this.columnIndex = index;
     this.columnName = this.header?.[index] ?? `column ${index + 1}`;
     const n = this.fieldCount;
+    // Plain UTF-8 is the rule and goes unsaid; any other encoding is named.
+    const enc = this.encoding;
+    const decoded = enc !== undefined && enc !== 'utf-8' ? ` Decoded as ${encodingName(enc)}.` : '';
     const detail =
       n > 1
-        ? `Reading ${this.columnLabel()} of ${n} (${why}); delimiter ${delimiterName(this.delimiter)}${this.decimalComma ? ', decimal comma accepted' : ''}.`
-        : `Reading ${this.columnLabel()} (${why}).`;
+        ? `Reading ${this.columnLabel()} of ${n} (${why}); delimiter ${delimiterName(this.delimiter)}${this.decimalComma ? ', decimal comma accepted' : ''}.${decoded}`
+        : `Reading ${this.columnLabel()} (${why}).${decoded}`;
     this.report(0, 'csv-column', 'information', detail);
   }
 
   private missing(no: number, what: string): void {
     const n = this.fieldCount;
-    const available = this.header
-      ? this.header.map((h, i) => `${i + 1}: "${h}"`).join(', ')
+    const h = this.header;
+    const shown = (name: string) => (name.length > 40 ? `${name.slice(0, 40)}...` : name);
+    const available = h
+      ? h
+          .slice(0, COLUMNS_LISTED)
+          .map((name, i) => `${i + 1}: "${shown(name)}"`)
+          .join(', ') + (h.length > COLUMNS_LISTED ? `, ... (${h.length} in all)` : '')
       : `1 to ${n} (the file has no header row, so columns are chosen by number)`;
     this.report(
       no,
@@ -386,26 +598,60 @@ export class HistoryCsvReader {
   private dataRow(raw: string, no: number): void {
     const field = fieldAt(raw, this.columnIndex, this.delimiter);
     const x = parseHistoryNumber(field, this.decimalComma);
-    if (Number.isNaN(x)) {
+    if (!Number.isFinite(x)) {
       // Blank lines and comments are rare: look for them only when the row has no number.
-      if (isBlank(raw)) {
-        this.blank(no);
-        return;
+      if (Number.isNaN(x)) {
+        if (isBlank(raw)) {
+          this.blank(no);
+          return;
+        }
+        if (isComment(raw)) return;
       }
-      if (isComment(raw)) return;
-      this.badRowCount++;
-      if (this.badRowCount <= this.maxRowReports) {
-        const shown = field.trim();
-        const msg =
-          shown === ''
-            ? `No value in ${this.columnLabel()}; row skipped.`
-            : `"${shown.length > 40 ? `${shown.slice(0, 40)}...` : shown}" in ${this.columnLabel()} is not a number; row skipped.`;
-        this.report(no, 'csv-non-numeric', 'error', msg);
-      }
+      this.badRow(no, field.trim(), x);
       return;
     }
     this.valueCount++;
     if (this.opts.onValue !== undefined) this.opts.onValue(x, no);
+  }
+
+  /**
+   * A row whose value cannot be read as a finite load: an error with its line. It is left
+   * out of the count, and a user of the numbers must not act on a history with such rows
+   * (`badRowCount > 0`): a lost sample may be the largest load of the history.
+   */
+  private badRow(no: number, shown: string, x: number): void {
+    this.badRowCount++;
+    const nonFinite = !Number.isNaN(x) || NON_FINITE_WORD_RE.test(shown);
+    if (nonFinite) this.nonFiniteRowCount++;
+    if (this.badRowCount > this.maxRowReports) return;
+    const quoted = `"${shown.length > 40 ? `${shown.slice(0, 40)}...` : shown}" in ${this.columnLabel()}`;
+    if (!nonFinite) {
+      const msg =
+        shown === ''
+          ? `No value in ${this.columnLabel()}; row skipped.`
+          : `${quoted} is not a number; row skipped.`;
+      this.report(no, 'csv-non-numeric', 'error', msg);
+      return;
+    }
+    const why = Number.isNaN(x)
+      ? 'is not a finite number (a logger writes it for a lost or saturated sample)'
+      : 'is beyond the largest number there is (about 1.8e308)';
+    this.report(no, 'history-non-finite', 'error', `${quoted} ${why}; row skipped.`);
+  }
+
+  /** A line longer than `MAX_LINE`: skipped unread, an error like a row without a number. */
+  private longLine(length: number): void {
+    const no = ++this.lineCount;
+    this.badRowCount++;
+    if (this.badRowCount > this.maxRowReports) return;
+    const head = this.overlongHead.replace(/[^\x20-\x7e]/g, '?');
+    this.overlongHead = '';
+    this.report(
+      no,
+      'history-line-too-long',
+      'error',
+      `Line ${no} has ${length} characters (it starts "${head}..."), more than the ${MAX_LINE} a history line may have: a history has one sample per line; the line is skipped.`,
+    );
   }
 
   private blank(no: number): void {

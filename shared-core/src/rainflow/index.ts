@@ -12,9 +12,16 @@ export {
   type HistoryDelimiter,
   type HistoryIssue,
   isTimeColumnName,
+  MAX_HISTORY_LINE,
   parseHistoryNumber,
 } from './csvHistory';
 export { type HistogramBin, type HistogramLimits, histogramLimitsFor, RangeMeanHistogram } from './histogram';
+export {
+  encodingName,
+  HistoryDecoder,
+  type HistoryEncoding,
+  sniffHistoryEncoding,
+} from './historyDecoder';
 export {
   RAINFLOW_SOURCE,
   RainflowCounter,
@@ -23,4 +30,5 @@ export {
   type RainflowResult,
   rainflow,
 } from './rainflowCounter';
+export { type ScaledSpreadProblem, scaledSpreadProblem } from './scaledSpread';
 export { TurningPointDetector, turningPoints } from './turningPoints';

@@ -22,6 +22,15 @@ import { TurningPointDetector } from './turningPoints';
  *
  * Cycles go to an `onCycle(range, mean, count)` callback and/or are kept in an array
  * (`keepCycles`); totals are always aggregated. No object is allocated per sample.
+ *
+ * Overflow: every range is a difference of two samples, so every range is finite as long as
+ * the spread of the samples (largest minus smallest) is; a mean is taken as a/2 + b/2, which
+ * cannot overflow. A sample that would make the spread exceed the largest number (about
+ * 1.8e308) stops the count (`overflowAt`, an error note `history-overflow`): nothing after
+ * it is counted, and no range or mean is ever NaN or Infinity. The residue held is bounded
+ * (`maxResidue`, 2^23 points by default, 64 MiB): a history whose residue grows beyond it
+ * (reversals that keep shrinking, a ring-down of millions of cycles) stops the count the
+ * same way, so that memory stays bounded whatever the file.
  */
 export interface RainflowCycle {
   range: number;
@@ -37,6 +46,8 @@ export interface RainflowOptions {
   onCycle?: (range: number, mean: number, count: number) => void;
   /** Also collect the cycles into `RainflowResult.cycles` (memory grows with the history). */
   keepCycles?: boolean;
+  /** Largest residue held (points); beyond it the count stops with an error. Default 2^23. */
+  maxResidue?: number;
 }
 
 export interface RainflowResult {
@@ -48,7 +59,7 @@ export interface RainflowResult {
   halfCycles: number;
   /** Finite samples read. */
   sampleCount: number;
-  /** Non-finite samples ignored. */
+  /** Non-finite samples that could not be counted (an error note says so: the count is incomplete). */
   skippedSamples: number;
   turningPointCount: number;
   /** The residue (points left after the three-point rules), counted as half cycles in step (6). */
@@ -57,8 +68,10 @@ export interface RainflowResult {
   /** Extremes of the finite samples (0 when there are none). */
   min: number;
   max: number;
-  /** Sum over cycles of count * range (equals half the total variation of the turning points). */
+  /** Sum over cycles of count * range (equals half the total variation of the turning points; may be Infinity for ranges near 1e308). */
   sumCountRange: number;
+  /** 1-based number of the finite sample that stopped the count (spread overflow or residue limit); 0 when none did. */
+  overflowAt: number;
   notes: MethodNote[];
   source: string;
 }
@@ -81,25 +94,52 @@ export class RainflowCounter {
   private sumCountRange = 0;
   private lo = Number.POSITIVE_INFINITY;
   private hi = Number.NEGATIVE_INFINITY;
+  private readonly maxResidue: number;
+  private stopped: '' | 'spread' | 'residue' = '';
+  private stopAt = 0;
+  private stopValue = 0;
   private result?: RainflowResult;
 
   constructor(opts: RainflowOptions = {}) {
     this.detector = new TurningPointDetector(opts.gate ?? 0);
     this.onCycle = opts.onCycle;
     if (opts.keepCycles) this.kept = [];
+    const m = opts.maxResidue;
+    this.maxResidue = m !== undefined && m >= 3 ? Math.floor(m) : 1 << 23;
   }
 
-  /** Feeds one sample. Ignored after `finish()`. */
-  push(x: number): void {
-    if (this.result !== undefined) return;
+  /**
+   * Feeds one sample. Returns false when it is not counted: not finite, or the count has
+   * stopped (an overflowing spread or the residue limit; see `overflowAt`), or after `finish()`.
+   */
+  push(x: number): boolean {
+    if (this.result !== undefined) return false;
     if (!Number.isFinite(x)) {
       this.skipped++;
-      return;
+      return false;
+    }
+    if (this.stopped !== '') return false;
+    const lo = Math.min(x, this.lo);
+    const hi = Math.max(x, this.hi);
+    if (!(hi - lo <= Number.MAX_VALUE)) {
+      this.stop('spread', x);
+      return false;
     }
     this.samples++;
-    if (x < this.lo) this.lo = x;
-    if (x > this.hi) this.hi = x;
-    if (this.detector.push(x)) this.addPoint(this.detector.point);
+    this.lo = lo;
+    this.hi = hi;
+    if (this.detector.push(x)) {
+      this.addPoint(this.detector.point);
+      // Counted; but the residue may not grow further: the samples after this one are not.
+      if (this.n > this.maxResidue) this.stop('residue', x, this.samples);
+    }
+    return true;
+  }
+
+  private stop(why: 'spread' | 'residue', x: number, at = this.samples + 1): void {
+    this.stopped = why;
+    this.stopAt = at;
+    this.stopValue = x;
   }
 
   /** Feeds many samples (a typed array avoids any boxing). */
@@ -128,13 +168,13 @@ export class RainflowCounter {
       if (X < Y) break;
       if (n === 3) {
         // Y contains the starting point S (the bottom of the stack): half cycle, drop S.
-        this.emit(Y, (a + b) * 0.5, 0.5);
+        this.emit(Y, a * 0.5 + b * 0.5, 0.5);
         s[0] = b;
         s[1] = c;
         n = 2;
       } else {
         // Full cycle: discard the peak and valley of Y, keep the newest point.
-        this.emit(Y, (a + b) * 0.5, 1);
+        this.emit(Y, a * 0.5 + b * 0.5, 1);
         s[n - 3] = c;
         n -= 2;
       }
@@ -159,10 +199,10 @@ export class RainflowCounter {
     for (let i = 0; i + 1 < residue.length; i++) {
       const a = residue[i];
       const b = residue[i + 1];
-      this.emit(Math.abs(b - a), (a + b) * 0.5, 0.5);
+      this.emit(Math.abs(b - a), a * 0.5 + b * 0.5, 0.5);
     }
     const notes: MethodNote[] = [];
-    if (this.samples < 3) {
+    if (this.samples < 3 && this.stopped === '') {
       notes.push({
         code: 'history-too-few-points',
         severity: 'error',
@@ -175,11 +215,23 @@ export class RainflowCounter {
         message: 'No cycles were counted: the history is constant or all its reversals are below the gate.',
       });
     }
+    if (this.stopped !== '') {
+      const v = Number(this.stopValue.toPrecision(6)).toString();
+      notes.push({
+        code: 'history-overflow',
+        severity: 'error',
+        message:
+          this.stopped === 'spread'
+            ? `Sample ${this.stopAt} (${v}) lies more than the largest number (about 1.8e308) away from another sample: its range cannot be computed, so counting stopped there and the count is incomplete. Write the history in a larger unit.`
+            : `After sample ${this.stopAt} the residue of the rainflow count (the peaks and valleys not yet closed into cycles) passed ${this.maxResidue} points: counting stopped there and the count is incomplete (a history whose reversals keep shrinking, such as a long ring-down, keeps every one of them in the residue): count it in parts.`,
+      });
+    }
     if (this.skipped > 0) {
+      // A lost sample may be the largest load of the history: counting without it is not safe.
       notes.push({
         code: 'history-non-finite',
-        severity: 'warning',
-        message: `${this.skipped} non-finite sample${this.skipped === 1 ? ' was' : 's were'} ignored.`,
+        severity: 'error',
+        message: `${this.skipped} sample${this.skipped === 1 ? ' is' : 's are'} not finite (NaN or Infinity) and could not be counted: the count misses them, and they may be the largest loads of the history.`,
       });
     }
     this.result = {
@@ -194,6 +246,7 @@ export class RainflowCounter {
       min: this.samples > 0 ? this.lo : 0,
       max: this.samples > 0 ? this.hi : 0,
       sumCountRange: this.sumCountRange,
+      overflowAt: this.stopped !== '' ? this.stopAt : 0,
       notes,
       source: RAINFLOW_SOURCE,
     };

@@ -29,7 +29,8 @@ export class TurningPointDetector {
   private finished = false;
 
   constructor(gate = 0) {
-    this.gate = Number.isFinite(gate) && gate > 0 ? gate : 0;
+    // NaN or a negative gate is no gate; an infinite gate (a gate over a vanishing scale) drops every reversal.
+    this.gate = Number.isNaN(gate) ? 0 : Math.max(gate, 0);
   }
 
   /** Feeds one sample; returns true when it confirms a turning point (then read `point`). */

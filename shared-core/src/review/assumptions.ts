@@ -17,6 +17,7 @@ import { type BlockSource, findFatigueBlocks, splitLines } from '../language/mar
 import { parseStatements } from '../language/statements';
 import type { CheckResult, Diagnostic, NoteResult, Severity } from '../language/types';
 import { OPTIONS } from '../language/vocabulary';
+import { defaultedOptions } from '../methods/registry';
 
 /** Diagnostic codes that announce a default although their name does not say so. */
 export const ASSUMPTION_CODES: ReadonlySet<string> = new Set(['no-criterion', 'no-feature']);
@@ -44,20 +45,19 @@ export function isAssumptionCode(code: string): boolean {
   return code.startsWith('defaulted-') || code.startsWith('assumed-') || ASSUMPTION_CODES.has(code);
 }
 
-/** Options whose default a check evidently used, judged from the values it produced. */
+/** Options of every method whose default a check evidently used, judged from the values it produced (the method adds its own). */
 const OPTION_USED: Record<string, (c: CheckResult) => boolean> = {
   criterion: () => false, // announced by the `no-criterion` diagnostic instead
   rotation: (c) =>
-    c.values.kb?.origin === 'computed' && (c.values.kb.inputs ?? []).some((i) => i.name === 'd'),
-  'load-line': (c) =>
-    c.method === 'stress-life' && c.values.n_f !== undefined && c.values.n_f.origin !== 'stated',
-  'notch-sensitivity': (c) => c.values.q?.origin === 'computed' || c.values.qs?.origin === 'computed',
+    c.values.kb?.origin === 'computed' &&
+    !c.values.kb.unused &&
+    (c.values.kb.inputs ?? []).some((i) => i.name === 'd'),
+  'notch-sensitivity': (c) =>
+    (c.values.q?.origin === 'computed' && !c.values.q.unused) ||
+    (c.values.qs?.origin === 'computed' && !c.values.qs.unused),
   'mean-concentration': (c) =>
     c.values.n_f !== undefined &&
     ['Kf', 'Kfs', 'Kf_ax'].some((k) => c.values[k]?.si !== null && (c.values[k]?.si ?? 1) > 1),
-  miner: (c) => c.method === 'damage' && c.values.D !== undefined,
-  'paris-units': (c) => c.method === 'crack-growth' && c.values.C_paris !== undefined,
-  'crack-geometry': (c) => c.method === 'crack-growth' && c.values.Y !== undefined,
 };
 
 function lineOfDiagnostic(d: Diagnostic): number {
@@ -81,7 +81,8 @@ export function assumptionsRegister(note: NoteResult, text?: string): Assumption
     const byName = new Map<string, AssumptionEntry>();
     for (const name of c.order) {
       const v = c.values[name];
-      if (v?.origin !== 'default') continue;
+      // A default in a chain that a stated value replaced assumes nothing.
+      if (v?.origin !== 'default' || v.unused) continue;
       const e: AssumptionEntry = {
         check: c.id,
         checkLine,
@@ -119,9 +120,12 @@ export function assumptionsRegister(note: NoteResult, text?: string): Assumption
     const block = blocks.find((b) => b.openLine === c.range.start.line);
     if (block) {
       const stated = optionKeysStated(block);
-      for (const [key, used] of Object.entries(OPTION_USED)) {
+      const usedBy = { ...OPTION_USED, ...defaultedOptions(c.method) };
+      // In the vocabulary's order of the options, whichever method declares them.
+      for (const key of Object.keys(OPTIONS)) {
         const info = OPTIONS[key];
-        if (!info?.default || stated.has(key) || !used(c)) continue;
+        const used = usedBy[key];
+        if (!used || !info?.default || stated.has(key) || !used(c)) continue;
         const meaning = info.values?.[info.default];
         entries.push({
           check: c.id,

@@ -1,7 +1,7 @@
 /** Incremental evaluation of an open note, and the few core helpers the editor features read. */
 export { ID_PATTERN } from '../language/markdownBlocks';
-export type { BlockHead } from '../language/noteLoop';
-export { stripComment } from '../language/statements';
+export { isReservedWord, stripComment } from '../language/statements';
+export type { BlockHead } from '../note/noteLoop';
 export { DIM_LABEL } from '../units/dimensions';
 export { displayUnit, toDisplayNumber } from '../units/format';
 export {

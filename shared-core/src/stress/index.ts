@@ -13,4 +13,5 @@ export {
   type EquivalentStresses,
   type EquivalentStressInput,
   equivalentStresses,
+  pointEquivalentStresses,
 } from './vonMises';

@@ -26,7 +26,7 @@ describe('budgetedReader', () => {
   it('stops at the first chunk past the budget and answers history-time-budget', () => {
     const clock = { t: 0 };
     const { reader, delivered } = slowReader(Array(1000).fill('1\n'), clock, 10);
-    const got: string[] = [];
+    const got: Array<string | Uint8Array> = [];
     const r = budgetedReader(reader, 100, () => clock.t).read('h.csv', (c) => got.push(c));
     expect(r).toMatchObject({ ok: false, code: 'history-time-budget' });
     // 10 chunks take 100 ms (within the budget); the 11th is past it and is not passed on.

@@ -12,7 +12,7 @@
  *   the convention of ASTM E647 (delta_K = K_max when R <= 0); a wholly compressive cycle grows
  *   no crack.
  */
-import { type Computed, computed, infinite, MPA } from '../computed';
+import { type Computed, computed, infinite, MPA } from '../../computed';
 import {
   centreCrackFiniteWidth,
   criticalCrackSize,
@@ -23,13 +23,13 @@ import {
   parisConstantNotes,
   parisLife,
   singleEdgeCrackFiniteWidth,
-} from '../crack';
-import type { CheckContext } from '../language/checkContext';
-import type { Range } from '../language/types';
-import { nameInfo } from '../language/vocabulary';
-import { type ShellKind, shellStresses } from '../stress';
-import { formatNumber } from '../units/format';
-import type { MethodExtras } from './runMethod';
+} from '../../crack';
+import type { CheckContext } from '../../language/checkContext';
+import type { Range } from '../../language/types';
+import { nameInfo } from '../../language/vocabulary';
+import { type ShellKind, shellStresses } from '../../stress';
+import { formatNumber } from '../../units/format';
+import type { MethodExtras } from '../types';
 
 /** Points of the crack-size curve for the diagram. */
 const CURVE_POINTS = 50;

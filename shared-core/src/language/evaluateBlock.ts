@@ -1,58 +1,30 @@
 /**
- * Evaluates every fatigue block of a note, top to bottom: reads the statements, checks
- * names, units and options, runs the check's method, then its requirements. Never throws:
- * whatever goes wrong inside one check becomes a diagnostic of that check.
+ * Evaluates one fatigue block: reads the statements, checks names, units and options, runs
+ * the check's method, then its requirements. Never throws: whatever goes wrong inside the
+ * check becomes a diagnostic of that check. The note's loop is `note/noteLoop.ts`.
  */
-import { runCheckMethod } from '../checks/runMethod';
+import { copyMethodFields, reviewCheck, runCheckMethod } from '../checks/runMethod';
+import { findMaterial, nearestMaterialKeys } from '../materials';
+import { defaultMethod } from '../methods/registry';
 import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import type { UnitSystem } from '../units/format';
 import type { Unit } from '../units/mathInstance';
-import { limitBlocks } from './budgets';
-import { CheckContext, type HistoryChunkReader, type StatedInput } from './checkContext';
+import { CheckContext, type StatedInput } from './checkContext';
+import type { CheckScopeEntry, EvaluateOptions } from './checkScope';
 import { ExpressionError, evaluateExpression, type Quantity, rawFromSI, type Scope } from './expressions';
-import { type BlockSource, findFatigueBlocks, ID_PATTERN, splitLines } from './markdownBlocks';
-import { BlockSequence } from './noteLoop';
+import { type BlockSource, ID_PATTERN } from './markdownBlocks';
+import { checkConsistency, valuePlausibility } from './plausibility';
 import { evaluateRequirements } from './requirements';
-import { type AssignStatement, type OptionStatement, parseStatements, type Statement } from './statements';
-import { type CheckResult, type Diagnostic, lineRange, type Method, type NoteResult, range } from './types';
+import {
+  type AssignStatement,
+  isReservedWord,
+  type OptionStatement,
+  parseStatements,
+  type Statement,
+} from './statements';
+import { type CheckResult, lineRange, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
-import { editDistance, INPUT_NAMES, MAGNITUDE, nearest, OPTIONS, POSITIVE, RESULT_NAMES } from './vocabulary';
-
-export interface EvaluateOptions {
-  /** Display units; 'auto' follows the units the note is written in. */
-  unitSystem?: UnitSystem | 'auto';
-  significantDigits?: number;
-  /** Reads history files for `method: damage`; without it such checks say the file cannot be read here. */
-  histories?: HistoryChunkReader;
-  /** Per-lint switches by diagnostic code (false turns a lint off). */
-  lints?: Record<string, boolean>;
-  /**
-   * Milliseconds a check may spend reading its history files (the language server sets it;
-   * unset, as in the command line, reads to the end). See `historyBudget.ts`.
-   */
-  historyBudgetMs?: number;
-}
-
-/** Raw mathjs values of a finished check, for `check.name` references in later checks. */
-export interface CheckScopeEntry {
-  result: CheckResult;
-  raw: Map<string, Unit | number>;
-}
-
-export function evaluateNote(text: string, options: EvaluateOptions = {}): NoteResult {
-  const lines = splitLines(text);
-  const blocks = limitBlocks(findFatigueBlocks(text, lines));
-  const sequence = new BlockSequence(options);
-  const checks: CheckResult[] = [];
-  const diagnostics: Diagnostic[] = [];
-  for (let i = 0; i < blocks.length; i++) {
-    const entry = sequence.evaluate(blocks[i], i);
-    sequence.add(entry);
-    checks.push(entry.result);
-    for (const d of entry.result.diagnostics) diagnostics.push(d);
-  }
-  return { checks, diagnostics };
-}
+import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from './vocabulary';
 
 export function evaluateBlock(
   block: BlockSource,
@@ -82,7 +54,7 @@ export function evaluateBlock(
   const raw = new Map<string, Unit | number>();
   const result: CheckResult = {
     id,
-    method: 'stress-life',
+    method: defaultMethod(),
     range: range(block.openLine, 0, block.closeLine, 0),
     headerRange: header,
     insertLine: ctx.insertLine,
@@ -102,10 +74,11 @@ export function evaluateBlock(
       stated.set(name, input);
       ctx.recordStated(name, input.q, input.stmt, classify(input.q.dim));
     }
-    const faults = readStatements(ctx, statements, scope, raw);
+    // Values that cannot be physical, read against each other, the library and the family.
+    const faults = readStatements(ctx, statements, scope, raw) + checkConsistency(ctx);
     const title = optionMap.get('title')?.value.text;
     if (title) result.title = title;
-    result.method = (ctx.option('method') as Method | undefined) ?? 'stress-life';
+    result.method = ctx.option('method') ?? defaultMethod();
     result.criterion = ctx.option('criterion');
     // An input the author wrote but the tool could not read (wrong unit, misspelt option,
     // unreadable line) would silently change every result: none is produced until it is fixed.
@@ -116,15 +89,11 @@ export function evaluateBlock(
         `no results until the ${faults === 1 ? 'error' : `${faults} errors`} in this check's inputs ${faults === 1 ? 'is' : 'are'} fixed: a misread input would change them`,
       );
     const extras = faults > 0 ? {} : runCheckMethod(result.method, ctx);
-    if (extras.haigh) result.haigh = extras.haigh;
-    if (extras.sn) result.sn = extras.sn;
-    if (extras.tables) result.tables = extras.tables;
-    if (extras.crackCurve) result.crackCurve = extras.crackCurve;
-    if (extras.histogram) result.histogram = extras.histogram;
-    if (extras.criterion) result.criterion = extras.criterion;
+    copyMethodFields(result.method, extras, result as unknown as Record<string, unknown>);
     const requireStatements = statements.filter((s) => s.kind === 'require');
     const hasErrors = ctx.diagnostics.some((d) => d.severity === 'error');
     result.requirements = evaluateRequirements(ctx, requireStatements, scope, faults > 0);
+    if (faults === 0) reviewCheck(ctx, result.method, result.requirements, requireStatements);
     if (hasErrors) result.status = 'error';
     else if (result.requirements.length === 0) result.status = 'unchecked';
     else if (result.requirements.some((r) => r.met === null)) result.status = 'error';
@@ -148,6 +117,12 @@ function checkHeader(ctx: CheckContext, block: BlockSource, seenIds: Map<string,
       'warning',
       'missing-id',
       'this check has no id: write one after `fatigue` (e.g. ```fatigue drive_shaft) so that reports and other checks can name it',
+    );
+  } else if (isReservedWord(block.id)) {
+    ctx.diag(
+      'error',
+      'reserved-name',
+      `\`${block.id}\` cannot be a check id: every JavaScript object has that name, so it is reserved; choose another id (other checks cannot refer to this one)`,
     );
   } else if (!ID_PATTERN.test(block.id)) {
     ctx.diag(
@@ -267,6 +242,22 @@ function readOption(ctx: CheckContext, s: OptionStatement): void {
     return;
   }
   ctx.options.set(key, s);
+  if (key === 'material' && !findMaterial(s.value.text)) {
+    // A key the library does not have: the strengths and the family would be guessed.
+    const near = nearestMaterialKeys(s.value.text, 3);
+    ctx.diag(
+      'error',
+      'unknown-material',
+      `\`${s.value.text}\` is not in the material library${near.length ? `: did you mean ${near.map((k) => `\`${k}\``).join(', ')}?` : ''}`,
+      s.value.range,
+      near.map((k, i) => ({
+        title: `Change to \`${k}\``,
+        edits: [{ range: s.value.range, newText: k }],
+        preferred: i === 0,
+      })),
+    );
+    return;
+  }
   if (info.values && !(s.value.text in info.values)) {
     const choices = Object.keys(info.values);
     const near = nearest(s.value.text, choices, 3);
@@ -332,7 +323,7 @@ function readAssign(
       const later = used ? statementsBelow.get(used) : undefined;
       if (later !== undefined && later > s.line)
         message = `${name}: \`${used}\` is stated below, on line ${later + 1}: names are read top to bottom, so move that line above this one`;
-      else if (used && UNIT_SLIPS[used])
+      else if (used && Object.hasOwn(UNIT_SLIPS, used))
         message = `${name}: \`${used}\` is not a unit here: write \`${UNIT_SLIPS[used]}\``;
     }
     ctx.diag('error', err.code, message, r);
@@ -387,10 +378,11 @@ function readAssign(
       return;
     }
     dim = info.dim === 'paris' ? 'one' : info.dim;
-    const bad = implausible(name, q.si, dim);
+    const shownDim = dim;
+    const bad = valuePlausibility(name, q.si, dim, (x) => ctx.display(x, shownDim));
     if (bad) {
-      ctx.diag('error', 'absurd-value', `\`${name}\` ${bad}`, s.expr.range);
-      return;
+      ctx.diag(bad.severity, 'absurd-value', `\`${name}\` ${bad.message}`, s.expr.range);
+      if (bad.severity === 'error') return;
     }
   }
   raw.set(name, q.raw);
@@ -427,18 +419,6 @@ const UNIT_SLIPS: Record<string, string> = {
   MM: 'mm',
   deg: 'degC or degF',
 };
-
-/** Why a stated reserved value cannot be a real input, or undefined when it can. */
-function implausible(name: string, si: number, dim: DimKey): string | undefined {
-  if (POSITIVE.has(name) && !(si > 0)) return 'must be positive';
-  if (name === 'reliability' && si >= 1) return 'must be below 1 (e.g. 0.99 or 99 %)';
-  const m = MAGNITUDE[dim];
-  if (!m) return undefined;
-  const a = Math.abs(si);
-  if (a > m.max || (a > 0 && a < m.min))
-    return `= ${si.toExponential(3)} (SI) is not a plausible value: expected ${m.label}; check the unit`;
-  return undefined;
-}
 
 /** A value of an earlier check as a mathjs value, built on first use (most are never referenced). */
 export function memberValue(entry: CheckScopeEntry | undefined, name: string): Unit | number | undefined {

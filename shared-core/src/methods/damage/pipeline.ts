@@ -15,8 +15,15 @@
  * the chosen criterion -> cycles to failure on the S-N line under the chosen Miner rule.
  * In a damage check `D` names the damage (a result), not the shoulder diameter.
  */
-import { type Computed, computed, type MethodNote, MPA } from '../computed';
-import { type CriterionModel, criterionModel, type StrengthSet } from '../criteria';
+
+import { chooseCriterion, needsYield, strengthSetFor } from '../../checks/criterionChoice';
+import { governingIndex, governingNote, pointName, warnRotationAssumed } from '../../checks/criticalPoints';
+import { enduranceChain } from '../../checks/enduranceChain';
+import { readStrengths } from '../../checks/material';
+import { type LevelBase, readSpectrumLevels, type SpectrumLevel } from '../../checks/spectrumLevels';
+import { type DamageSection, damageSection, notchEquivalent } from '../../checks/unitLoadStresses';
+import { type Computed, computed, type MethodNote, MPA } from '../../computed';
+import { type CriterionModel, criterionModel, type StrengthSet } from '../../criteria';
 import {
   cyclesToFailure,
   equivalentCycles,
@@ -24,9 +31,9 @@ import {
   type MinerResult,
   type MinerRule,
   repeatsToFailure,
-} from '../damage';
-import type { CheckContext } from '../language/checkContext';
-import type { CheckResult, Range, Severity, SnData } from '../language/types';
+} from '../../damage';
+import type { CheckContext } from '../../language/checkContext';
+import type { CheckResult, Range, Severity, SnData } from '../../language/types';
 import {
   HistoryCsvReader,
   type HistoryIssue,
@@ -34,16 +41,12 @@ import {
   RAINFLOW_SOURCE,
   RainflowCounter,
   RangeMeanHistogram,
-} from '../rainflow';
-import type { SnLine } from '../sn';
-import { type DimKey, sameVector, vectorOf } from '../units/dimensions';
-import { displayUnit, formatNumber, toDisplayNumber } from '../units/format';
-import { chooseCriterion, needsYield, strengthSetFor } from './criterionChoice';
-import { enduranceChain } from './enduranceChain';
-import { readStrengths } from './material';
-import type { MethodExtras } from './runMethod';
-import { type LevelBase, readSpectrumLevels, type SpectrumLevel } from './spectrumLevels';
-import { type DamageSection, damageSection, notchEquivalent } from './unitLoadStresses';
+  scaledSpreadProblem,
+} from '../../rainflow';
+import type { SnLine } from '../../sn';
+import { type DimKey, sameVector, vectorOf } from '../../units/dimensions';
+import { displayUnit, formatNumber, toDisplayNumber } from '../../units/format';
+import type { MethodExtras } from '../types';
 
 export type HistoryLoad = 'bending' | 'torsion' | 'axial' | 'pressure' | 'stress';
 
@@ -121,6 +124,9 @@ interface DamagePass {
   histogram?: CheckResult['histogram'];
   /** Inputs named in the derivation of D. */
   inputs: string[];
+  /** Two-point sections: the damage at each point (in `sec.points` order) and the governing one. */
+  pointDamage?: number[];
+  gov?: number;
 }
 
 interface Evaluation {
@@ -181,6 +187,21 @@ export function runDamage(ctx: CheckContext): MethodExtras {
 
   const sec = damageSection(ctx, st, used, loadRange);
   if (!sec) return {};
+  if (sec.geometry === 'round' && sec.rotating && used.has('M')) {
+    // A history's cycles have means of their own; a spectrum level its stated mean moment.
+    const mean = history ? 1 : (levels.find((l) => (l.loads.M?.m ?? 0) !== 0)?.loads.M?.m ?? 0);
+    const where = history
+      ? loadRange
+      : (levels.find((l) => (l.loads.M?.m ?? 0) !== 0)?.stmt.whole ?? loadRange);
+    warnRotationAssumed(ctx, mean, where);
+    if (history)
+      ctx.diag(
+        'warning',
+        'rotating-history',
+        'on a rotating shaft every revolution is a stress cycle: each cycle counted in the moment history is taken fully reversed at its largest moment, but a shaft that turns more often than the moment changes sees more cycles than the history holds. Count revolutions: state the levels as a spectrum (`spectrum: M_a = ..., n = revolutions`), or give the history of the bending stress at one fibre (`rotation: non-rotating`, `history-load: stress`)',
+        loadRange,
+      );
+  }
   const chain = enduranceChain(ctx, st, sec.loadKind, sec.geometry, sec.hasAxial);
   const choice = chooseCriterion(ctx);
   if (!choice) return {};
@@ -208,7 +229,12 @@ export function runDamage(ctx: CheckContext): MethodExtras {
   if (!pass) return { criterion };
 
   const res = pass.acc.result(10);
-  recordDamage(ctx, res, pass, ev, [...baseInputs, ...pass.inputs], loadRange);
+  if (!Number.isFinite(res.D)) {
+    const why = 'the Miner sum overflows (lives too short to divide by: stresses far beyond the strength)';
+    ctx.diag('error', 'damage-overflow', `${why}: check the loads and \`history_scale\``, loadRange);
+    return { criterion };
+  }
+  recordDamage(ctx, sec, res, pass, ev, [...baseInputs, ...pass.inputs], loadRange);
   const sn: SnData = {
     a: ev.line.a,
     b: ev.line.b,
@@ -403,44 +429,74 @@ function historyPass(
   scan.end();
   reportIssues(ctx, scan.issues, h.range, h.path);
   if (scan.fatal || scan.valueCount < 3) return null;
+  if (scan.badRowCount > 0) {
+    // A skipped row may hold the largest load: no damage from what is left.
+    const n = scan.badRowCount;
+    ctx.diag(
+      'information',
+      'results-withheld',
+      `no damage until the ${n} row${n === 1 ? '' : 's'} of \`${h.path}\` without a finite number ${n === 1 ? 'is' : 'are'} fixed: a lost sample may be the largest load of the history`,
+      h.range,
+    );
+    return null;
+  }
 
-  // Notch stresses per 1.0 of the file (linear in the load).
+  // Notch stresses per 1.0 of the file (linear in the load), at each point of the section.
   const absScale = Math.abs(h.scale);
   const shear = sec.route === 'shear';
   const unitLoad = (a: number, m: number) => ({ [h.base]: { a, m } });
-  const cA = notchEquivalent(sec, unitLoad(1, 0)).sa * absScale;
-  const cM = notchEquivalent(sec, unitLoad(0, 1)).sm * h.scale;
-  recordUnitStresses(ctx, h, sec, cA, cM);
+  const perA = notchEquivalent(sec, unitLoad(1, 0));
+  const perM = notchEquivalent(sec, unitLoad(0, 1));
+  const two = sec.points.length > 1;
+  // Overflow of the scaled history, with the largest per-unit stresses of the section's points.
+  const cA = Math.max(...perA.map((x) => Math.abs(x.sa))) * absScale;
+  const cM = Math.max(...perM.map((x) => Math.abs(x.sm) + Math.abs(x.sa))) * Math.abs(h.scale);
+  const bad = scaledSpreadProblem(lo, hi, cA, cM, h.path);
+  if (bad) {
+    const scaleRange = ctx.stated.get('history_scale')?.stmt.expr.range;
+    ctx.diag('error', bad.code, bad.message, bad.on === 'scale' ? (scaleRange ?? h.range) : h.range);
+    return null;
+  }
+  recordUnitStresses(ctx, h, sec, perA[0].sa * absScale, perM[0].sm * h.scale, two);
 
-  // Pass 2: count and sum.
+  // Pass 2: count once, sum at every point.
   const maxRange = hi - lo;
   const hist = new RangeMeanHistogram(histogramLimitsFor(lo, hi, HISTOGRAM_BINS));
-  const acc = new MinerAccumulator(ev.line, ev.rule);
-  const bins = Array.from({ length: RANGE_BINS }, () => ({
+  const states = sec.points.map((_, k) => ({
+    cA: perA[k].sa * absScale,
+    cM: perM[k].sm * h.scale,
+    // Amplitude per unit mean: nonzero where a mean load alternates at the point (the moment on
+    // a rotating shaft is fully reversed at every fibre, unitLoadStresses.ts).
+    cMa: perM[k].sa * absScale,
     acc: new MinerAccumulator(ev.line, ev.rule),
-    count: 0,
-    sarMax: 0,
+    bins: Array.from({ length: RANGE_BINS }, () => ({
+      acc: new MinerAccumulator(ev.line, ev.rule),
+      count: 0,
+      sarMax: 0,
+    })),
+    tally: new NoteTally(),
+    staticCount: 0,
   }));
-  const tally = new NoteTally();
-  let staticCount = 0;
   const onCycle = (range: number, mean: number, count: number): void => {
     hist.add(range, mean, count);
-    const sa = cA * range * 0.5;
-    const sm = shear ? Math.abs(cM * mean) : cM * mean;
-    const eq = ev.model.equivalentReversed(sa, sm, ev.set);
-    tally.add(eq.notes, count);
-    if (eq.infinite) {
-      staticCount += count;
-      return;
-    }
-    const sar = eq.value;
-    acc.add(sar, count);
     let i = maxRange > 0 ? Math.floor((range / maxRange) * RANGE_BINS) : 0;
     if (i >= RANGE_BINS) i = RANGE_BINS - 1;
-    const bin = bins[i];
-    bin.acc.add(sar, count);
-    bin.count += count;
-    if (sar > bin.sarMax) bin.sarMax = sar;
+    for (const st of states) {
+      const sa = st.cA * range * 0.5 + st.cMa * Math.abs(mean);
+      const sm = shear ? Math.abs(st.cM * mean) : st.cM * mean;
+      const eq = ev.model.equivalentReversed(sa, sm, ev.set);
+      st.tally.add(eq.notes, count);
+      if (eq.infinite) {
+        st.staticCount += count;
+        continue;
+      }
+      const sar = eq.value;
+      st.acc.add(sar, count);
+      const bin = st.bins[i];
+      bin.acc.add(sar, count);
+      bin.count += count;
+      if (sar > bin.sarMax) bin.sarMax = sar;
+    }
   };
   const counter = new RainflowCounter({ gate: h.gate, onCycle });
   const csv = new HistoryCsvReader({
@@ -456,22 +512,35 @@ function historyPass(
   const rf = counter.finish();
   for (const n of rf.notes)
     if (n.code !== 'history-too-few-points') ctx.diag(n.severity ?? 'warning', n.code, n.message, h.range);
-  tally.report(ctx, ev.critRange, 'counted cycles');
-  if (staticCount > 0)
+  if (rf.overflowAt > 0) return null; // the count stopped (residue limit): no damage from part of it
+  // The governing point: the one with more cycles that fail statically, then the larger damage.
+  let gov = 0;
+  states.forEach((st, k) => {
+    const b = states[gov];
+    if (
+      st.staticCount > b.staticCount ||
+      (st.staticCount === b.staticCount && st.acc.result(0).D > b.acc.result(0).D)
+    )
+      gov = k;
+  });
+  const g = states[gov];
+  const at = two ? ` at ${sec.points[gov].words}` : '';
+  g.tally.report(ctx, ev.critRange, `counted cycles${at}`);
+  if (g.staticCount > 0)
     ctx.diag(
       'error',
       'static-failure',
-      `${formatNumber(staticCount, 6)} counted cycles reach the static strength (mean stress at or beyond the criterion's limit): the part fails statically; they are left out of D`,
+      `${formatNumber(g.staticCount, 6)} counted cycles reach the static strength${at} (mean stress at or beyond the criterion's limit): the part fails statically; they are left out of D`,
       h.range,
     );
 
-  // Damage per range bin.
-  const D = acc.result(0).D;
+  // Damage per range bin, at the governing point.
+  const D = g.acc.result(0).D;
   const loadDisp = (si: number) => toDisplayNumber(si, h.dim, ctx.system).value;
   const unit = unitText(h.dim, ctx);
   const rows: string[][] = [];
   const points: SnData['points'] = [];
-  bins.forEach((b, i) => {
+  g.bins.forEach((b, i) => {
     if (b.count === 0) return;
     const from = loadDisp((absScale * maxRange * i) / RANGE_BINS);
     const to = loadDisp((absScale * maxRange * (i + 1)) / RANGE_BINS);
@@ -501,11 +570,12 @@ function historyPass(
     counts = counts.map((row) => row.reverse());
   }
   return {
-    acc,
+    acc: g.acc,
     cycles: rf.totalCycles,
+    ...(two ? { pointDamage: states.map((st) => st.acc.result(0).D), gov } : {}),
     tables: [
       {
-        title: `Damage per range bin of \`${h.path}\` (${RANGE_BINS} equal bins of the load range; sigma_ar at the bin's largest cycle)`,
+        title: `Damage per range bin of \`${h.path}\`${at} (${RANGE_BINS} equal bins of the load range; sigma_ar at the bin's largest cycle)`,
         columns: [`range (${unit})`, 'cycles', 'sigma_ar max', 'N at sigma_ar max', 'damage', 'share of D'],
         rows,
       },
@@ -522,7 +592,14 @@ function historyPass(
 }
 
 /** The derivation of the stresses of 1.0 in the file, for the hover and the report. */
-function recordUnitStresses(ctx: CheckContext, h: HistorySetup, sec: DamageSection, cA: number, cM: number) {
+function recordUnitStresses(
+  ctx: CheckContext,
+  h: HistorySetup,
+  sec: DamageSection,
+  cA: number,
+  cM: number,
+  two: boolean,
+) {
   const shear = sec.route === 'shear';
   const s = shear ? 'tau' : 'sigma';
   const per = sec.perUnit[h.base];
@@ -554,7 +631,8 @@ function recordUnitStresses(ctx: CheckContext, h: HistorySetup, sec: DamageSecti
         ? ['sigma_a_eq_unit = Kf_ax * sigma_unit / 0.85', 'sigma_m_eq_unit = Kf_ax * sigma_unit', ['Kf_ax']]
         : ['sigma_a_eq_unit = Kf * sigma_unit', 'sigma_m_eq_unit = Kf * sigma_unit', ['Kf']],
   };
-  const [fa, fm, ks] = notch[sec.route];
+  const [fa, fmOne, ks] = notch[sec.route];
+  const fm = two ? `${fmOne}  (at +M c/I; at -M c/I the same with the opposite sign)` : fmOne;
   const src =
     "the check's combined-loading rule (Budynas & Nisbett, Shigley's MED 10th ed., Sec. 6-14, Eqs. 6-66, 6-67) applied to 1.0 of the file; loads are linear, so each cycle's stresses are these times its half range and mean";
   ctx.result(`${s}_a_eq_unit`, computed(cA, fa, src), [`${s}_unit`, ...ks], {
@@ -575,62 +653,80 @@ function spectrumPass(
   sec: DamageSection,
   ev: Evaluation,
 ): DamagePass | null {
-  const acc = new MinerAccumulator(ev.line, ev.rule);
-  const rows: Array<{ cells: string[]; d: number }> = [];
-  const points: SnData['points'] = [];
+  const two = sec.points.length > 1;
+  const states = sec.points.map(() => ({
+    acc: new MinerAccumulator(ev.line, ev.rule),
+    rows: [] as Array<{ cells: string[]; d: number }>,
+    points: [] as SnData['points'],
+    D: 0,
+    notes: [] as Array<{ notes: MethodNote[]; range: Range }>,
+  }));
   let cycles = 0;
   let failed = false;
   for (const lv of levels) {
-    const { sa, sm } = notchEquivalent(sec, lv.loads);
-    const eq = ev.model.equivalentReversed(sa, sm, ev.set);
-    for (const n of eq.notes ?? []) {
-      const sev = n.severity ?? 'warning';
-      if (sev === 'error' || sev === 'warning') ctx.diag(sev, n.code, n.message, lv.stmt.whole);
-    }
-    if (eq.infinite) {
-      ctx.diag(
-        'error',
-        'static-failure',
-        "this level's mean stress reaches the criterion's static limit: the part fails statically",
-        lv.stmt.whole,
-      );
-      failed = true;
-      continue;
-    }
-    const sar = eq.value;
-    acc.add(sar, lv.n);
+    const at = notchEquivalent(sec, lv.loads);
     cycles += lv.n;
-    const life = cyclesToFailure(sar, ev.line, ev.rule);
-    const d = life.infinite || !(life.value > 0) ? 0 : lv.n / life.value;
-    rows.push({
-      cells: [
-        String(lv.stmt.line + 1),
-        lv.text,
-        ctx.display(sa, 'stress'),
-        ctx.display(sm, 'stress'),
-        ctx.display(sar, 'stress'),
-        formatNumber(lv.n, 6),
-        life.infinite ? 'infinite' : formatNumber(life.value, 4),
-        formatNumber(d, 4),
-      ],
-      d,
-    });
-    points.push({
-      label: `level on line ${lv.stmt.line + 1}`,
-      sigma_ar: sar,
-      N: life.infinite ? null : life.value,
-      count: lv.n,
+    at.forEach(({ sa, sm }, k) => {
+      const st = states[k];
+      const eq = ev.model.equivalentReversed(sa, sm, ev.set);
+      if (eq.notes) st.notes.push({ notes: eq.notes, range: lv.stmt.whole });
+      if (eq.infinite) {
+        ctx.diag(
+          'error',
+          'static-failure',
+          `this level's mean stress reaches the criterion's static limit${two ? ` at ${sec.points[k].words}` : ''}: the part fails statically`,
+          lv.stmt.whole,
+        );
+        failed = true;
+        return;
+      }
+      const sar = eq.value;
+      st.acc.add(sar, lv.n);
+      const life = cyclesToFailure(sar, ev.line, ev.rule);
+      const d = life.infinite || !(life.value > 0) ? 0 : lv.n / life.value;
+      st.D += d;
+      st.rows.push({
+        cells: [
+          String(lv.stmt.line + 1),
+          lv.text,
+          ctx.display(sa, 'stress'),
+          ctx.display(sm, 'stress'),
+          ctx.display(sar, 'stress'),
+          formatNumber(lv.n, 6),
+          life.infinite ? 'infinite' : formatNumber(life.value, 4),
+          formatNumber(d, 4),
+        ],
+        d,
+      });
+      st.points.push({
+        label: `level on line ${lv.stmt.line + 1}`,
+        sigma_ar: sar,
+        N: life.infinite ? null : life.value,
+        count: lv.n,
+      });
     });
   }
   if (failed) return null;
-  const D = rows.reduce((s, r) => s + r.d, 0);
+  // The governing point: the larger damage; the criterion's notes are reported for it.
+  const gov = governingIndex(
+    states.map((st) => st.acc.result(0).D),
+    'max',
+  );
+  const g = states[gov];
+  for (const { notes, range } of g.notes)
+    for (const n of notes) {
+      const sev = n.severity ?? 'warning';
+      if (sev === 'error' || sev === 'warning') ctx.diag(sev, n.code, n.message, range);
+    }
+  const D = g.D;
   const shear = sec.route === 'shear';
   return {
-    acc,
+    acc: g.acc,
     cycles,
+    ...(two ? { pointDamage: states.map((st) => st.acc.result(0).D), gov } : {}),
     tables: [
       {
-        title: 'Damage per spectrum level',
+        title: two ? `Damage per spectrum level at ${sec.points[gov].words}` : 'Damage per spectrum level',
         columns: [
           'line',
           'level',
@@ -642,16 +738,17 @@ function spectrumPass(
           'damage',
           'share of D',
         ],
-        rows: rows.map((r) => [...r.cells, D > 0 ? `${((100 * r.d) / D).toFixed(1)} %` : '0 %']),
+        rows: g.rows.map((r) => [...r.cells, D > 0 ? `${((100 * r.d) / D).toFixed(1)} %` : '0 %']),
       },
     ],
-    points,
+    points: g.points,
     inputs: [],
   };
 }
 
 function recordDamage(
   ctx: CheckContext,
+  sec: DamageSection,
   res: MinerResult,
   pass: DamagePass,
   ev: Evaluation,
@@ -675,6 +772,26 @@ function recordDamage(
   // `D` stated as a length (diagnosed): the damage takes the name here.
   ctx.stated.delete('D');
   const minerStated = ctx.options.has('miner');
+  if (pass.pointDamage && pass.gov !== undefined) {
+    const pts = sec.points;
+    pts.forEach((p, k) => {
+      ctx.result(
+        pointName('D', p),
+        computed(pass.pointDamage![k], `${pointName('D', p)} = sum of n_i / N_i at this fibre`, res.source),
+        inputs,
+        { dim: 'one', range, meaning: `Miner damage of one pass at ${p.words}` },
+      );
+    });
+    notes.push(
+      governingNote(
+        ctx,
+        'D',
+        pts,
+        pass.gov,
+        pts.map((p) => ctx.values[pointName('D', p)]?.display ?? ''),
+      ),
+    );
+  }
   ctx.result('D', { ...res, notes }, inputs, {
     dim: 'one',
     meaning: 'Miner damage of one pass of the history or spectrum',

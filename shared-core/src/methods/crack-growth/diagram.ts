@@ -3,7 +3,7 @@
  * (pairs of crack size in metres and cycles), its end at the critical size, and the
  * inspection interval when the check has one. Draws the numbers only.
  */
-import { displayUnit, formatCycles, formatNumber } from '../units/format';
+
 import {
   AXIS_TICKS,
   type Axis,
@@ -15,8 +15,9 @@ import {
   legend,
   openSvg,
   pointLabel,
-} from './frame';
-import { esc, niceDomain, pointsAttr, px } from './svg';
+} from '../../diagrams/frame';
+import { esc, niceDomain, pointsAttr, px } from '../../diagrams/svg';
+import { displayUnit, formatCycles, formatNumber } from '../../units/format';
 
 export interface CrackGrowthMarks {
   /** Critical crack size in metres (the curve's end when omitted). */

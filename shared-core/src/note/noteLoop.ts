@@ -6,12 +6,13 @@
  * top to bottom: each block sees the checks added before it.
  */
 import { solveBlock } from '../design/solve';
-import { notEvaluated, overBudget } from './budgets';
-import { type CheckScopeEntry, type EvaluateOptions, evaluateBlock } from './evaluateNote';
-import { MAX_NESTING } from './fenceScan';
-import { historyBudget } from './historyBudget';
-import { type BlockSource, ID_PATTERN } from './markdownBlocks';
-import type { Diagnostic } from './types';
+import { notEvaluated, overBudget } from '../language/budgets';
+import type { CheckScopeEntry, EvaluateOptions } from '../language/checkScope';
+import { evaluateBlock } from '../language/evaluateBlock';
+import { MAX_NESTING } from '../language/fenceScan';
+import { historyBudget } from '../language/historyBudget';
+import { type BlockSource, ID_PATTERN } from '../language/markdownBlocks';
+import type { Diagnostic } from '../language/types';
 
 /** A block as the session keeps it between updates (its lines are read again when needed). */
 export type BlockHead = Omit<BlockSource, 'lines'>;

@@ -1,0 +1,111 @@
+/**
+ * Strain-life at notches: the cyclic stress-strain curve and its Masing doubling, notch-root
+ * stress and strain by Neuber's rule or Glinka's energy rule, the strain-life curve with
+ * Coffin-Manson-Basquin, Morrow and Smith-Watson-Topper, estimates of the constants from
+ * monotonic properties, the local path with material memory and its closed loops, and the
+ * Palmgren-Miner sum over them. Pure; every function returns `Computed` records (or kernels
+ * for the inner loops), never NaN or Infinity.
+ */
+export {
+  CYCLIC_CURVE_SOURCE,
+  type CyclicCurve,
+  cyclicCurveNotes,
+  cyclicEnergy,
+  cyclicStrain,
+  cyclicStrainFromStress,
+  cyclicStress,
+  cyclicStressFromStrain,
+  cyclicYieldKernel,
+  cyclicYieldStrength,
+  isUsableCurve,
+  MASING_SOURCE,
+  masingEnergy,
+  masingStrainFromStressRange,
+  masingStrainRange,
+  masingStressFromStrainRange,
+  masingStressRange,
+} from './cyclicCurve';
+export {
+  LOCAL_PATH_SOURCE,
+  type LocalLoop,
+  type LocalPath,
+  type PathOptions,
+  type PathPoint,
+  pathCurve,
+  pathSteps,
+  type SpectrumLevel,
+  traceConstantAmplitude,
+  traceHistory,
+  traceSpectrum,
+} from './localPath';
+export { decreasingRootOn, increasingRoot, type MonotoneRoot } from './monotoneRoot';
+export {
+  firstLoadingKernel,
+  GLINKA_SOURCE,
+  generalYieldNotes,
+  NEUBER_SOURCE,
+  type NotchFactorKind,
+  type NotchInput,
+  type NotchPoint,
+  type NotchRange,
+  type NotchRangeResult,
+  type NotchRootResult,
+  type NotchRule,
+  notchFactorNote,
+  notchRootFirstLoading,
+  notchRootReversal,
+  notchSource,
+  reversalKernel,
+} from './notchRoot';
+export {
+  constantAmplitudeStrainLife,
+  historyStrainLife,
+  type LoopLife,
+  type NotchStrainLifeInput,
+  type NotchStrainLifeResult,
+  STRAIN_MINER_SOURCE,
+  spectrumStrainLife,
+} from './notchStrainLife';
+export {
+  COMPATIBILITY_SOURCE,
+  compatibleCyclicCurve,
+  type EstimateClass,
+  type EstimatedConstants,
+  type EstimateInput,
+  type EstimateMethod,
+  estimateConstants,
+  HARDNESS_SOURCE,
+  hardnessMethod,
+  MUS_SOURCE,
+  modifiedUniversalSlopes,
+  type StrainLifeMaterial,
+  UML_SOURCE,
+  uniformMaterialLaw,
+} from './propertyEstimates';
+export {
+  isUsableConstants,
+  type LifeKernel,
+  type LifeLoad,
+  type LifeResult,
+  type LifeStatus,
+  LOG_REVERSALS_MAX,
+  lifeNotes,
+  MEAN_STRESS_MODELS,
+  type MeanStressModel,
+  MORROW_STRAIN_SOURCE,
+  modelFormula,
+  modelSource,
+  REVERSALS_DATA_MAX,
+  REVERSALS_DATA_MIN,
+  reversalsKernel,
+  STRAIN_LIFE_SOURCE,
+  type StrainLifeConstants,
+  SWT_STRAIN_SOURCE,
+  strainAmplitudeAt,
+  strainAmplitudeKernel,
+  strainLife,
+  strainLifeConstantNotes,
+  strainLifeCurvePoints,
+  transitionLife,
+  transitionReversalsKernel,
+} from './strainLifeCurve';
