@@ -28,14 +28,12 @@ export async function activate(
   /** Settles when the server has started (or failed to); requests made meanwhile wait for it. */
   let ready: Promise<void> = Promise.resolve();
 
-  const requester = () =>
-    client
-      ? summaryRequester(async <R>(method: string, params: unknown): Promise<R> => {
-          await ready;
-          if (!client || !running) throw new Error('the language server is not running');
-          return client.sendRequest<R>(method, params);
-        })
-      : undefined;
+  const send = async <R>(method: string, params: unknown): Promise<R> => {
+    await ready;
+    if (!client || !running) throw new Error('the language server is not running');
+    return client.sendRequest<R>(method, params);
+  };
+  const requester = () => (client ? summaryRequester(send) : undefined);
   const service = new SummaryService(requester);
   const previews = new PreviewResultStore(requester, service);
   const status = new SafetyFactorStatus();
@@ -63,7 +61,7 @@ export async function activate(
       ),
     ),
     vscode.commands.registerCommand('fatigueNotes.checkWorkspace', () => workspaceCheck.run()),
-    vscode.commands.registerCommand('fatigueNotes.insertCheck', () => insertCheck()),
+    vscode.commands.registerCommand('fatigueNotes.insertCheck', () => insertCheck(send)),
     vscode.commands.registerCommand('fatigueNotes.exportReport', () => exportReport(serverModule)),
   );
 

@@ -11,7 +11,8 @@ import { buildDetail, buildPanelModel, buildRows } from '../src/panel/model';
 import { fatiguePreviewPlugin, type MarkdownItLike, type Token } from '../src/preview';
 import { statusText } from '../src/statusText';
 import { worstSafetyFactor } from '../src/summary';
-import { freshId, TEMPLATE_CHOICES, templateSnippet } from '../src/templates';
+import { templateChoices, templateSnippetFor } from '../../server/src/lsp/templates';
+import { freshId } from '../src/templates';
 import { serverSummary } from './serverSummary';
 
 const ROOT = resolve(__dirname, '../..');
@@ -265,11 +266,11 @@ describe('check templates', () => {
   });
 
   it('gives blocks that the core reads as the chosen method, with only placeholders to fill', () => {
-    for (const c of TEMPLATE_CHOICES) {
+    for (const c of templateChoices()) {
       for (const system of ['SI', 'US'] as const) {
         // Expand the snippet as VS Code would with its defaults: ${1:x} -> x, ${1|a,b|} -> a.
-        const text = templateSnippet(c.kind, 'x_1', system)
-          .replace(/\$\{\d+\|([^,|]+)[^}]*\}/g, '$1')
+        const text = templateSnippetFor({ kind: c.kind, id: 'x_1', system })
+          .snippet.replace(/\$\{\d+\|([^,|]+)[^}]*\}/g, '$1')
           .replace(/\$\{\d+:([^}]*)\}/g, '$1')
           .replace(/\$0/, '');
         const r = evaluateNote(text);

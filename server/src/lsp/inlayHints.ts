@@ -43,7 +43,9 @@ function hintsOfCheck(view: NoteView, c: CheckResult, range: Range, out: InlayHi
     const shown = ranked.slice(0, MAX_PER_LINE);
     // A stated value: what the tool would compute and why (`fit 1: no notch feature stated`).
     const parts = shown.map((v) =>
-      v.origin === 'stated' && v.tool ? v.tool.label : `${v.name} ${v.display}${v.unused ? ' (not used)' : ''}`,
+      v.origin === 'stated' && v.tool
+        ? v.tool.label
+        : `${v.name} ${v.display}${v.unused ? ' (not used)' : ''}`,
     );
     if (ranked.length > shown.length) parts.push('… more in the hover');
     out.push({

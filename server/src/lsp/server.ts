@@ -44,6 +44,12 @@ import {
   sameSettings,
 } from './settings';
 import { SUMMARY_REQUEST, type SummaryParams, summaryOf } from './summary';
+import {
+  TEMPLATE_SNIPPET_REQUEST,
+  TEMPLATES_REQUEST,
+  templateChoices,
+  templateSnippetFor,
+} from './templates';
 
 export function startServer(): void {
   const connection = createConnection(ProposedFeatures.all);
@@ -322,6 +328,10 @@ export function listen(connection: Connection): void {
       if (!v) throw new ResponseError(ErrorCodes.InvalidParams, `${uri} is not open`);
       return summaryOf(v);
     }),
+  );
+  connection.onRequest(TEMPLATES_REQUEST, () => guard('templates', [], () => templateChoices()));
+  connection.onRequest(TEMPLATE_SNIPPET_REQUEST, (p: unknown) =>
+    guard('templateSnippet', null, () => templateSnippetFor(p)),
   );
 }
 
