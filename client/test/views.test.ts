@@ -7,11 +7,11 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { checkDiagrams, evaluateNote } from '@fatigue-notes/core';
 import { describe, expect, it } from 'vitest';
+import { templateChoices, templateSnippetFor } from '../../server/src/lsp/templates';
 import { buildDetail, buildPanelModel, buildRows } from '../src/panel/model';
 import { fatiguePreviewPlugin, type MarkdownItLike, type Token } from '../src/preview';
 import { statusText } from '../src/statusText';
 import { worstSafetyFactor } from '../src/summary';
-import { templateChoices, templateSnippetFor } from '../../server/src/lsp/templates';
 import { freshId } from '../src/templates';
 import { serverSummary } from './serverSummary';
 

@@ -1,7 +1,7 @@
 /** "Insert a new check…": pick a method, get a block with its statements to fill in. */
 import * as vscode from 'vscode';
 import { readSettings } from '../settings';
-import { freshId, TEMPLATE_SNIPPET_REQUEST, type TemplateChoice, TEMPLATES_REQUEST } from '../templates';
+import { freshId, TEMPLATE_SNIPPET_REQUEST, TEMPLATES_REQUEST, type TemplateChoice } from '../templates';
 
 export type ServerRequest = <R>(method: string, params: unknown) => Promise<R>;
 
