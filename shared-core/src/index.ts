@@ -37,7 +37,7 @@ export * from './design';
 export * from './diagrams';
 export type { EvaluateOptions } from './language/checkScope';
 export { compileExpression, ExpressionError, evaluateExpression } from './language/expressions';
-export { headlineValues } from './language/headline';
+export { headlineRank, headlineValues, shownNames } from './language/headline';
 export { type BlockSource, findFatigueBlocks, splitLines } from './language/markdownBlocks';
 export { parseLine, parseStatements, type Statement } from './language/statements';
 export { findMaterial, MATERIALS } from './materials';

@@ -10,6 +10,7 @@ import {
   type Diagnostic,
   findMaterial,
   formatNumber,
+  headlineValues,
   nameInfo,
   OPTIONS,
   type Position,
@@ -120,7 +121,7 @@ export function derivation(v: Value, digits = 4): string {
   if (v.unused) out.push(`*Not used:* ${v.unused}.`);
   if (v.origin === 'stated' && v.tool) {
     out.push(
-      `Stated in the note: \`${v.expression ?? v.display}\` = **${v.display}**. The tool's own value: **${v.tool.display}**` +
+      `Stated in the note: \`${v.expression ?? v.display}\` = **${v.display}**, used in place of what fatigue-notes would compute: **${v.tool.display}** (${v.tool.basis}, ${v.tool.why})` +
         (v.tool.formula ? `, from \`${v.tool.formula}\`` : '') +
         (v.tool.source ? ` (${v.tool.source})` : ''),
     );
@@ -143,9 +144,7 @@ export function derivation(v: Value, digits = 4): string {
 
 export function checkSummary(c: CheckResult): string {
   const head = `**${c.id ?? '(check without id)'}**${c.title ? ` — ${c.title}` : ''}`;
-  const key = ['n_f', 'n_y', 'N_f', 'S_f', 'D', 'repeats', 'N_cg', 'N_insp']
-    .filter((n) => c.values[n])
-    .map((n) => `${n} = ${c.values[n].display}`);
+  const key = headlineValues(c).map((v) => `${v.name} = ${v.display}`);
   const reqs = c.requirements.map((r) => `${r.met === true ? '✓' : r.met === false ? '✗' : '?'} ${r.text}`);
   const lines = [
     head,

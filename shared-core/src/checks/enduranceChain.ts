@@ -295,13 +295,20 @@ export function enduranceChain(
       ctx.result('Se_prime', rotatingBeamEndurance(st.cls, Sut), ['Sut'], { range: ctx.rangeOf('Sut') });
     const prime = chain(() => (ctx.has('Se_prime') ? ctx.replacedBy('Se_prime', estimate) : estimate()));
     const tool = k.all && prime !== null ? marinCorrected('Se', factorValues(k), prime, 'Se_prime') : null;
-    S = ctx.result('Se', tool, [...MARIN_INPUTS, 'Se_prime'], { range: ctx.header });
+    S = ctx.result('Se', tool, [...MARIN_INPUTS, 'Se_prime'], {
+      range: ctx.header,
+      tool: { basis: 'Marin equation' },
+    });
   } else {
     N_ref = referenceLife(ctx, st);
     const base = chain(() => referenceStrength(ctx, st, N_ref));
     const tool =
       k.all && base !== undefined ? marinCorrected('S_ref', factorValues(k), base, 'Sf_ref') : null;
-    S = ctx.result('S_ref', tool, [...MARIN_INPUTS, 'Sf_ref'], { dim: 'stress', range: ctx.header });
+    S = ctx.result('S_ref', tool, [...MARIN_INPUTS, 'Sf_ref'], {
+      dim: 'stress',
+      range: ctx.header,
+      tool: { basis: 'Marin equation' },
+    });
   }
 
   // S-N line.
