@@ -95,9 +95,9 @@ describe('panel model', () => {
     ]);
   });
 
-  it('names the life column from the server: damage D for a damage check, N_cg for crack growth', () => {
+  it('names the life column from the server: damage D_sum for a damage check, N_cg for crack growth', () => {
     const damage = serverSummary(DAMAGE);
-    expect(buildRows(damage)[0].life).toMatchObject({ name: 'D', text: damage[0].values.D.display });
+    expect(buildRows(damage)[0].life).toMatchObject({ name: 'D_sum', text: damage[0].values.D_sum.display });
     const crack = serverSummary(CRACK);
     expect(buildRows(crack)[0].life).toMatchObject({ name: 'N_cg', text: crack[0].values.N_cg.display });
   });
@@ -254,7 +254,7 @@ describe('Markdown preview plugin', () => {
     checks = damage;
     const html = md.render(DAMAGE);
     expect(html).toContain(
-      `<th scope="row"><code>D</code></th><td class="fatigue-notes-num">${damage[0].values.D.display}</td>`,
+      `<th scope="row"><code>D_sum</code></th><td class="fatigue-notes-num">${damage[0].values.D_sum.display}</td>`,
     );
   });
 });

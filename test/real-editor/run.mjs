@@ -725,8 +725,8 @@ async function main() {
       (c) => c.id === 'hub_fillet_logged',
     );
     check(
-      reported && report.includes('hub_fillet_logged') && logged && report.includes(logged.values.D.display),
-      `Export a report writes samples/ferry-ramp-hoist-damage.html with the history-driven damage D = ${logged?.values.D.display}`,
+      reported && report.includes('hub_fillet_logged') && logged && report.includes(logged.values.D_sum.display),
+      `Export a report writes samples/ferry-ramp-hoist-damage.html with the history-driven damage D_sum = ${logged?.values.D_sum.display}`,
     );
     await page.screenshot({ path: join(OUT, '11-report-exported.png') });
 
@@ -888,10 +888,10 @@ async function sampleAgrees(page, palette, workspace, name) {
   if (name === 'ferry-ramp-hoist-damage.md') {
     const logged = blocks.find((b) => b.id === 'hub_fillet_logged');
     const c = expected.find((x) => x.id === 'hub_fillet_logged');
-    const D = logged?.rows.find(([n]) => n === 'D')?.[1];
+    const D = logged?.rows.find(([n]) => n === 'D_sum')?.[1];
     check(
-      D !== undefined && D === display(c, 'D'),
-      `the preview shows the damage the history file drives: hub_fillet_logged D ${D} (check: ${display(c, 'D')}, ${display(c, 'cycles_counted')} cycles counted)`,
+      D !== undefined && D === display(c, 'D_sum'),
+      `the preview shows the damage the history file drives: hub_fillet_logged D_sum ${D} (check: ${display(c, 'D_sum')}, ${display(c, 'cycles_counted')} cycles counted)`,
     );
   }
   await page.screenshot({ path: join(OUT, `10-sample-${name.replace(/\.md$/, '')}.png`) });

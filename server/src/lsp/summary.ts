@@ -9,6 +9,8 @@ import {
   type CheckDiagram,
   type CheckResult,
   checkDiagrams,
+  type MethodFields,
+  methodModule,
   type NoteResult,
   shownNames,
 } from '@fatigue-notes/core';
@@ -20,7 +22,8 @@ export interface SummaryParams {
   uri: string;
 }
 
-export interface CheckSummary {
+/** The data behind the diagrams and tables are the fields the check's method declares (`MethodModule.fields`). */
+export interface CheckSummary extends Partial<MethodFields> {
   id: string | null;
   title?: string;
   method: CheckResult['method'];
@@ -34,11 +37,6 @@ export interface CheckSummary {
   shown: ReturnType<typeof shownNames>;
   /** The check's diagrams as the core draws them, without an embedded style (the page supplies it). */
   diagrams: CheckDiagram[];
-  haigh?: CheckResult['haigh'];
-  sn?: CheckResult['sn'];
-  tables?: CheckResult['tables'];
-  crackCurve?: CheckResult['crackCurve'];
-  histogram?: CheckResult['histogram'];
   range: CheckResult['range'];
   headerRange: CheckResult['headerRange'];
   /** Counted (the editor shows the diagnostics themselves), with the first error's message. */
@@ -95,11 +93,8 @@ export function summaryOfResult(
       if (errors[0]) s.diagnostics.firstError = errors[0].message;
       if (c.title !== undefined) s.title = c.title;
       if (c.criterion !== undefined) s.criterion = c.criterion;
-      if (c.haigh) s.haigh = c.haigh;
-      if (c.sn) s.sn = c.sn;
-      if (c.tables) s.tables = c.tables;
-      if (c.crackCurve) s.crackCurve = c.crackCurve;
-      if (c.histogram) s.histogram = c.histogram;
+      for (const f of methodModule(c.method)?.fields ?? [])
+        if (c[f] !== undefined) (s as unknown as Record<string, unknown>)[f] = c[f];
       return s;
     }),
   };

@@ -124,8 +124,8 @@ export const RESULT_NAMES: Record<string, NameInfo> = ownWords({
   n_y: { dim: 'one', meaning: 'first-cycle yield safety factor (Langer)' },
   S_f: { dim: 'stress', meaning: 'fatigue strength at the required life N' },
   N_f: { dim: 'one', meaning: 'predicted cycles to failure' },
-  D: { dim: 'one', meaning: 'Miner damage of one pass of the history or spectrum' },
-  repeats: { dim: 'one', meaning: 'passes of the history or spectrum to failure (1/D)' },
+  D_sum: { dim: 'one', meaning: 'Miner damage sum of one pass of the history or spectrum (old name D)' },
+  repeats: { dim: 'one', meaning: 'passes of the history or spectrum to failure (1/D_sum)' },
   N_eq: { dim: 'one', meaning: 'equivalent number of cycles at the largest level' },
   N_cg: { dim: 'one', meaning: 'crack-growth cycles from a_i to a_c' },
   N_insp: { dim: 'one', meaning: 'inspection interval in cycles' },
@@ -145,7 +145,7 @@ export const POINT_RESULT_BASES = [
   'n_f',
   'sigma_ar',
   'N_f',
-  'D',
+  'D_sum',
 ] as const;
 const POINT_WORDS = {
   pos: 'at the extreme fibre at +M c/I (a positive moment puts it in tension)',
@@ -324,6 +324,11 @@ export interface MethodWords {
   options?: Record<string, OptionInfo>;
   /** Of its inputs and results, those that must be strictly positive. */
   positive?: readonly string[];
+  /**
+   * Results it renamed, old name -> new name: a note that uses the old name (in `require:` or
+   * as `check_id.old`) still evaluates, with a `renamed-result` hint that offers the new one.
+   */
+  renamed?: Readonly<Record<string, string>>;
 }
 
 /**

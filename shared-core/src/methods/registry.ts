@@ -74,6 +74,15 @@ export function methodViews(method: string): MethodHeadline {
   return methodModule(method)?.headline ?? methodModule(defaultMethod())?.headline ?? NO_HEADLINE;
 }
 
+/**
+ * The new name of a result a method renamed (`D` -> `D_sum` in a damage check), or
+ * undefined: the old name stays an alias with a hint.
+ */
+export function renamedResult(method: string, name: string): string | undefined {
+  const to = methodModule(method)?.words?.renamed;
+  return to && Object.hasOwn(to, name) ? to[name] : undefined;
+}
+
 /** Every template of "insert a check", in registry order. */
 export function methodTemplates(): Array<MethodTemplate & { method: string }> {
   return METHODS.flatMap((m) => m.templates.map((t) => ({ ...t, method: m.name })));
