@@ -405,7 +405,9 @@ describe('damage at both fibres (Palmgren-Miner, Miner 1945; sums by hand)', () 
     near(si(c, 'D_sum_neg'), Dneg);
     near(si(c, 'D_sum'), Math.max(Dpos, Dneg));
     near(si(c, 'repeats'), 1 / Math.max(Dpos, Dneg));
-    expect(c.values.D_sum.notes?.join(' ')).toMatch(/D_sum is governed by the fibre a positive moment puts in/);
+    expect(c.values.D_sum.notes?.join(' ')).toMatch(
+      /D_sum is governed by the fibre a positive moment puts in/,
+    );
   });
 
   it('flipping every level gives the same D', () => {

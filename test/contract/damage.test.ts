@@ -333,7 +333,12 @@ describe('damage diagnostics on their lines', () => {
       'r = 2 mm',
       'feature: shoulder-fillet',
     ];
-    const dmg = evaluate(['method: damage', ...geometry, 'criterion: goodman', 'spectrum: M_a = 1200 N*m, n = 1000']).c;
+    const dmg = evaluate([
+      'method: damage',
+      ...geometry,
+      'criterion: goodman',
+      'spectrum: M_a = 1200 N*m, n = 1000',
+    ]).c;
     const sl = evaluate([...geometry, 'M_a = 1200 N*m', 'N = 1000']).c;
     expect(dmg.diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
     expect(dmg.values.D.dim).toBe('length');

@@ -725,7 +725,10 @@ async function main() {
       (c) => c.id === 'hub_fillet_logged',
     );
     check(
-      reported && report.includes('hub_fillet_logged') && logged && report.includes(logged.values.D_sum.display),
+      reported &&
+        report.includes('hub_fillet_logged') &&
+        logged &&
+        report.includes(logged.values.D_sum.display),
       `Export a report writes samples/ferry-ramp-hoist-damage.html with the history-driven damage D_sum = ${logged?.values.D_sum.display}`,
     );
     await page.screenshot({ path: join(OUT, '11-report-exported.png') });

@@ -6,7 +6,7 @@
 import { copyMethodFields, reviewCheck, runCheckMethod } from '../checks/runMethod';
 import { CheckContext, type StatedInput } from '../context/checkContext';
 import { type CheckResult, lineRange, type Range, range } from '../context/types';
-import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from '../context/vocabulary';
+import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES, wordOwners } from '../context/vocabulary';
 import { findMaterial, nearestMaterialKeys } from '../materials';
 import { defaultMethod, renamedResult } from '../methods/registry';
 import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
@@ -79,6 +79,7 @@ export function evaluateBlock(
     const title = optionMap.get('title')?.value.text;
     if (title) result.title = title;
     result.method = ctx.option('method') ?? defaultMethod();
+    flagOtherMethodsWords(ctx, result.method, statements);
     result.criterion = ctx.option('criterion');
     // An input the author wrote but the tool could not read (wrong unit, misspelt option,
     // unreadable line) would silently change every result: none is produced until it is fixed.
@@ -153,6 +154,26 @@ function checkHeader(ctx: CheckContext, block: BlockSource, seenIds: Map<string,
       'unclosed-block',
       'this block has no closing fence: everything to the end of the note is read as part of it',
     );
+}
+
+/**
+ * A name or option that is another method's own word (`a_c` of a crack-growth check stated
+ * in a stress-life check) feeds nothing here: say so, and which method reads it.
+ */
+function flagOtherMethodsWords(ctx: CheckContext, method: string, statements: Statement[]): void {
+  for (const s of statements) {
+    const word = s.kind === 'assign' ? s.name : s.kind === 'option' ? s.key : undefined;
+    if (!word) continue;
+    const owners = wordOwners(word.text);
+    if (!owners || owners.includes(method)) continue;
+    const which = owners.map((m) => `\`method: ${m}\``).join(' or ');
+    ctx.diag(
+      'warning',
+      'word-of-other-method',
+      `\`${word.text}\` is a word of ${which} checks: this \`method: ${method}\` check does not read it`,
+      word.range,
+    );
+  }
 }
 
 /** A use of a renamed result through another check (`damage_check.D` for `D_sum`). */

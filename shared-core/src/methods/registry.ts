@@ -21,7 +21,7 @@ const withdraw = new Map<string, () => void>();
 function declare(m: MethodModule): void {
   withdraw.get(m.name)?.();
   const undoWord = declareMethodWord(m.name, m.meaning, m === METHODS[0]);
-  const undoWords = declareMethodWords(m.words);
+  const undoWords = declareMethodWords(m.words, m.name);
   withdraw.set(m.name, () => {
     undoWords();
     undoWord();
