@@ -356,3 +356,37 @@ describe('temperature factor kd off steel', () => {
     expect(si(c, 'kd')).toBeCloseTo(kd, 6);
   });
 });
+
+describe("Walker's gamma off steel", () => {
+  // Dowling, Calhoun & Arcari, Fatigue Fract. Engng Mater. Struct. 32 (2009): the correlation
+  // gamma = -0.0002 Sut + 0.8818 is fitted to steels; the aluminium alloys of the paper spread
+  // from about 0.45 (7075-T6) to 0.65 (2024-T3) (from memory), so no average is taken for them.
+  const lines = (extra: string[]) => [
+    'material: al-7075-t6',
+    'surface: machined',
+    'temp = 20 degC',
+    'reliability = 0.9',
+    'd = 20 mm',
+    'feature: none',
+    'M_a = 20 N*m',
+    'F_a = 0 N',
+    'F_m = 10 kN',
+    'N = 1e6',
+    'criterion: walker',
+    ...extra,
+  ];
+
+  it('an aluminium with criterion walker and no gamma_walker: error on the criterion line', () => {
+    const c = check(lines([]));
+    const d = c.diagnostics.find((x) => x.code === 'walker-gamma-family');
+    expect(d?.severity).toBe('error');
+    expect(d?.range.start.line).toBe(11);
+    expect(c.status).toBe('error');
+  });
+
+  it('with gamma_walker stated: no such error, the stated gamma used', () => {
+    const c = check(lines(['gamma_walker = 0.45']));
+    expect(c.diagnostics.some((x) => x.code === 'walker-gamma-family')).toBe(false);
+    expect(si(c, 'gamma_walker')).toBe(0.45);
+  });
+});
