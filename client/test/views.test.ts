@@ -127,10 +127,22 @@ describe('status bar text', () => {
     expect(worst.value).toBe(Math.min(...all));
     expect(worst).toMatchObject({ name: 'n_f', check: 'lever_arm' });
     const t = statusText({ checks });
-    expect(t.text).toBe(`$(warning) lowest safety factor ${worst.display}`);
+    expect(t.text).toBe(
+      `$(warning) 1 failed · lowest safety factor ${worst.display}${worst.value < 1 ? ' (below 1)' : ''}`,
+    );
     expect(t.alarm).toBe(true);
     expect(t.tooltip).toContain('1 pass, 1 fail');
     expect(statusText({ checks: serverSummary(CONTRACT) }).alarm).toBe(false);
+  });
+
+  it('never shows a tick beside a safety factor below 1', () => {
+    // A check without a requirement on n_f (status unchecked or pass on another value).
+    const checks = serverSummary(CONTRACT).map((c) => ({
+      ...c,
+      values: { ...c.values, n_f: { ...c.values.n_f, si: 0.9989, display: '0.9989' } },
+    }));
+    const t = statusText({ checks: checks.map((c) => ({ ...c, status: 'pass' as const })) });
+    expect(t.text).toBe('$(warning) lowest safety factor 0.9989 (below 1)');
   });
 });
 

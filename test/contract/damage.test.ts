@@ -362,6 +362,18 @@ describe('damage diagnostics on their lines', () => {
     expect(c.values.D).toBeUndefined();
   });
 
+  it('a damage check that states the diameter D and requires `D <= 0.5`: the dimension error points to D_sum', () => {
+    const { c } = evaluate([
+      ...SECTION,
+      'D = 72 mm',
+      'spectrum: sigma_a = 300 MPa, n = 1000',
+      'require: D <= 0.5',
+    ]);
+    const d = diag(c, 'wrong-dimension');
+    expect(d.message).toMatch(/now `D_sum`/);
+    expect(d.fixes?.[0].edits[0].newText).toBe('D_sum');
+  });
+
   it('another check reading the damage by its old name `id.D` gets the same value and a hint', () => {
     const text = [
       note([...SECTION, 'spectrum: sigma_a = 300 MPa, n = 1000'], 'dmg'),

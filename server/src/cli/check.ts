@@ -80,6 +80,11 @@ export async function runCheckCommand(args: string[], io: Io): Promise<number> {
       return 2;
     }
   }
+  if (files.length === 0) {
+    // A CI job pointed at the wrong folder must not pass.
+    io.stderr(`fatigue-notes check: no Markdown note (*.md) in ${paths.join(', ')}\n`);
+    return 2;
+  }
   const reports: FileReport[] = [];
   for (const f of files) {
     let result: NoteResult;

@@ -190,7 +190,8 @@ const LIMITS: Record<string, Limit> = {
   },
   kc: {
     errorAbove: 1,
-    beyond: "cannot exceed 1: the load factor is 1 in bending, 0.85 axial, 0.59 torsion (Shigley's MED Eq. 6-26)",
+    beyond:
+      "cannot exceed 1: the load factor is 1 in bending, 0.85 axial, 0.59 torsion (Shigley's MED Eq. 6-26)",
   },
   kd: {
     errorAbove: 1.03,
@@ -199,13 +200,13 @@ const LIMITS: Record<string, Limit> = {
   },
   ke: {
     errorAbove: 1,
-    beyond: "cannot exceed 1: the reliability factor is 1 at 50 % reliability and falls above it (Shigley's MED Table 6-5)",
+    beyond:
+      "cannot exceed 1: the reliability factor is 1 at 50 % reliability and falls above it (Shigley's MED Table 6-5)",
   },
   kmisc: {
     errorAbove: 2,
     warnAbove: 1,
-    beyond:
-      'is no miscellaneous factor: more than doubling the endurance limit (common practice, no source)',
+    beyond: 'is no miscellaneous factor: more than doubling the endurance limit (common practice, no source)',
     unusual:
       'claims a benefit (shot peening, rolling, compressive residual stress): back it with fatigue tests of the treated part (common practice, no source)',
   },

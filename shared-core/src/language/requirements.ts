@@ -88,11 +88,24 @@ export function evaluateRequirements(
         const q = evaluateExpression(item.expr.text, scope);
         const want = vectorOf(v.dim);
         if (want && !sameVector(q.dim, want)) {
+          // `require: D <= 0.3` in a damage check that states the diameter D: the old name of the damage sum.
+          const newer = method && !renamed ? renamedResult(method, symbol) : undefined;
+          const hint =
+            newer && ctx.values[newer] ? `; the result once called \`${symbol}\` is now \`${newer}\`` : '';
           ctx.diag(
             'error',
             'wrong-dimension',
-            `\`${symbol}\` is ${ctx.dimLabel(v.dim)}; \`${item.expr.text}\` is ${ctx.dimLabel(classify(q.dim))}`,
+            `\`${symbol}\` is ${ctx.dimLabel(v.dim)}; \`${item.expr.text}\` is ${ctx.dimLabel(classify(q.dim))}${hint}`,
             item.expr.range,
+            hint && newer
+              ? [
+                  {
+                    title: `Change to \`${newer}\``,
+                    edits: [{ range: item.symbol.range, newText: newer }],
+                    preferred: true,
+                  },
+                ]
+              : [],
           );
           continue;
         }
