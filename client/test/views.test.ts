@@ -226,6 +226,22 @@ describe('Markdown preview plugin', () => {
     expect(html).toContain('<pre data-info="js"></pre>\n<pre');
   });
 
+  it('states the warnings of a check under it, not only their count', () => {
+    const md = fakeMarkdownIt();
+    // No temperature stated: the defaulted-temperature warning (docs/diagnostics.md).
+    const note = CONTRACT.replace(/^temp = .*\n/m, '');
+    const summary = serverSummary(note);
+    fatiguePreviewPlugin(
+      md,
+      () => ({ enabled: true }),
+      () => ({ state: 'ready', checks: summary }),
+    );
+    const html = md.render(note);
+    expect(summary[0].diagnostics?.firstWarnings?.join(' ')).toMatch(/room temperature assumed/);
+    expect(html).toContain('fatigue-notes-warnings');
+    expect(html).toMatch(/⚠ no operating temperature: room temperature assumed/);
+  });
+
   it('says "evaluating…" under every block until the results of this version are in, and numbers none', () => {
     const md = fakeMarkdownIt();
     fatiguePreviewPlugin(

@@ -18,6 +18,9 @@ import type { NoteView } from './locate';
 
 export const SUMMARY_REQUEST = 'fatigue/summary';
 
+/** Warnings of a check whose text the summary carries (the preview lists them). */
+const SHOWN_WARNINGS = 3;
+
 export interface SummaryParams {
   uri: string;
 }
@@ -40,7 +43,7 @@ export interface CheckSummary extends Partial<MethodFields> {
   range: CheckResult['range'];
   headerRange: CheckResult['headerRange'];
   /** Counted (the editor shows the diagnostics themselves), with the first error's message. */
-  diagnostics: { errors: number; warnings: number; firstError?: string };
+  diagnostics: { errors: number; warnings: number; firstError?: string; firstWarnings?: string[] };
 }
 
 export interface NoteSummary {
@@ -91,6 +94,9 @@ export function summaryOfResult(
         },
       };
       if (errors[0]) s.diagnostics.firstError = errors[0].message;
+      // The warnings themselves, so that the preview states them beside a pass (a few; the rest in the editor).
+      const warned = c.diagnostics.filter((d) => d.severity === 'warning').slice(0, SHOWN_WARNINGS);
+      if (warned.length > 0) s.diagnostics.firstWarnings = warned.map((d) => d.message);
       if (c.title !== undefined) s.title = c.title;
       if (c.criterion !== undefined) s.criterion = c.criterion;
       for (const f of methodModule(c.method)?.fields ?? [])
