@@ -94,7 +94,9 @@ export async function runCheckCommand(args: string[], io: Io): Promise<number> {
       io.stderr(`fatigue-notes check: cannot read ${f}: ${(e as Error).message}\n`);
       return 2;
     }
-    reports.push({ path: relative(io.cwd, f) || f, result });
+    // Inside the working folder as a relative path, elsewhere as given in full.
+    const rel = relative(io.cwd, f);
+    reports.push({ path: rel && !rel.startsWith('..') ? rel : f, result });
   }
   const failed = reports.some(
     (r) =>

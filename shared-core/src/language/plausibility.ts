@@ -163,6 +163,8 @@ const LIMITS: Record<string, Limit> = {
   },
   temp: {
     errorAbove: 1700 + 273.15,
+    errorBelow: 0,
+    below: 'is below absolute zero (-273.15 degC)',
     beyond: 'is above the melting point of every structural metal (1700 degC and above)',
   },
   f: {
