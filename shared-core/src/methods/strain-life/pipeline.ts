@@ -601,7 +601,7 @@ function readHistory(ctx: CheckContext): Loading | null {
   if (overflow) {
     ctx.diag(
       'error',
-      'history-overflow',
+      'history-too-many-peaks',
       `\`${path}\` has more than ${HISTORY_TURNING_POINTS_MAX} peaks and valleys: the local path keeps them all (its memory), so split the history into blocks or raise \`history_gate\``,
       range,
     );
