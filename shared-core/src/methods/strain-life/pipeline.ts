@@ -38,6 +38,7 @@ import {
   estimateConstants,
   historyStrainLife,
   type MeanStressModel,
+  modelFormula,
   type NotchFactorKind,
   type NotchRule,
   type NotchStrainLifeInput,
@@ -153,8 +154,7 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
     return undefined;
   };
   let E = get('E', cyc?.E);
-  if (E === undefined && !ctx.has('E') && lib && !cyc && ctx.options.has('estimate'))
-    E = ctx.library('E', lib.E, libStrength, matRange);
+  if (E === undefined && !ctx.has('E') && lib && !cyc) E = ctx.library('E', lib.E, libStrength, matRange);
   const stated = {
     sigma_f_prime: get('sigma_f_prime', cyc?.sigma_f_prime),
     b_basquin: get('b_basquin', cyc?.b),
@@ -163,7 +163,13 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
     K_prime: get('K_prime', cyc?.K_prime),
     n_prime: get('n_prime', cyc?.n_prime),
   };
-  if (E === undefined) {
+  const estimateStmt = ctx.options.get('estimate');
+  const estimateWord = ctx.option('estimate') as EstimateMethod | undefined;
+  const missing: string[] = [
+    ...(E === undefined ? ['E'] : []),
+    ...CONSTANTS.filter((n) => stated[n] === undefined),
+  ];
+  if (E === undefined && (missing.length === 1 || estimateWord !== undefined)) {
     if (!rejected(ctx, 'E'))
       ctx.diag(
         'error',
@@ -179,7 +185,6 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
       );
     return null;
   }
-  const missing = CONSTANTS.filter((n) => stated[n] === undefined);
   const inputs = ['E', ...CONSTANTS, ...CURVE];
   let sf = stated.sigma_f_prime;
   let b = stated.b_basquin;
@@ -187,8 +192,6 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
   let c = stated.c_coffin;
   let K = stated.K_prime;
   let n = stated.n_prime;
-  const estimateStmt = ctx.options.get('estimate');
-  const estimateWord = ctx.option('estimate') as EstimateMethod | undefined;
   if (missing.length > 0 || (estimateWord !== undefined && (K === undefined || n === undefined))) {
     if (estimateWord === undefined) {
       if (estimateStmt) return null; // a misspelt word: already diagnosed
@@ -248,7 +251,7 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
       );
     const est = estimateConstants(estimateWord, {
       Sut,
-      E,
+      E: E as number,
       RA: ctx.input('RA'),
       HB: ctx.input('HB'),
       materialClass: ec,
@@ -275,7 +278,8 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
     K = K ?? put('K_prime', est.K_prime);
     n = n ?? put('n_prime', est.n_prime);
   }
-  if (sf === undefined || b === undefined || ef === undefined || c === undefined) return null;
+  if (E === undefined || sf === undefined || b === undefined || ef === undefined || c === undefined)
+    return null;
   if (K === undefined || n === undefined) {
     const cc = compatibleCyclicCurve({ E, sigma_f_prime: sf, b, eps_f_prime: ef, c });
     const bad = (cc.K_prime.notes ?? []).some((x) => x.severity === 'error');
@@ -822,7 +826,14 @@ export function runStrainLife(ctx: CheckContext): MethodExtras {
       { range: r },
     );
   // The information notes of the chain (no damage, path kept for drawing ...) ride on N_f alone.
-  const withInfo = (c: Computed): Computed => ({ ...c, notes: info });
+  const withInfo = (c: Computed): Computed => ({
+    ...c,
+    formula:
+      loading.kind === 'constant'
+        ? `N_f = 2N_f / 2, 2N_f solved from ${modelFormula(model)}`
+        : 'N_f = cycles per pass * repeats (passes to failure)',
+    notes: info,
+  });
   ctx.result('N_f', withInfo(res.N_f), [...modelIn, 'eps_a', 'sigma_m_local', 'sigma_max_local'], {
     range: r,
     meaning:
