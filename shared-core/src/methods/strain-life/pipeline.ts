@@ -110,6 +110,10 @@ function rejected(ctx: CheckContext, name: string): boolean {
   );
 }
 
+function fmt(x: number): string {
+  return String(Number(x.toPrecision(4)));
+}
+
 function methodLine(ctx: CheckContext): Range {
   return ctx.optionRange('method') ?? ctx.header;
 }
@@ -319,7 +323,7 @@ function readNotch(ctx: CheckContext, rule: NotchRule): NotchRead | null {
     ctx.diag(
       'information',
       'notch-factor',
-      `${ruleName} with the stated fatigue notch factor Kf = ${K} in place of Kt (Topper, Wetzel & Morrow 1969): the local stress and strain are fatigue-effective values, not the elastic-plastic state at the notch root`,
+      `${ruleName} with the stated fatigue notch factor Kf = ${fmt(K)} in place of Kt (Topper, Wetzel & Morrow 1969): the local stress and strain are fatigue-effective values, not the elastic-plastic state at the notch root`,
       ctx.rangeOf('Kf'),
     );
     return { K, factor: 'Kf', range: ctx.rangeOf('Kf'), name: 'Kf' };
@@ -333,8 +337,8 @@ function readNotch(ctx: CheckContext, rule: NotchRule): NotchRead | null {
       'information',
       'notch-factor',
       r
-        ? `${ruleName} with the elastic stress concentration Kt = ${K}, the factor the rule is derived for; \`r\` is not used (no notch sensitivity enters the rule)`
-        : `${ruleName} with the elastic stress concentration Kt = ${K} (no notch root radius \`r\` stated: Kt is taken as the elastic factor of this notch, not a fatigue notch factor Kf); state \`Kf\` instead to use a fatigue-effective local strain`,
+        ? `${ruleName} with the elastic stress concentration Kt = ${fmt(K)}, the factor the rule is derived for; \`r\` is not used (no notch sensitivity enters the rule)`
+        : `${ruleName} with the elastic stress concentration Kt = ${fmt(K)} (no notch root radius \`r\` stated: Kt is taken as the elastic factor of this notch, not a fatigue notch factor Kf); state \`Kf\` instead to use a fatigue-effective local strain`,
       ctx.rangeOf('Kt'),
     );
     return { K, factor: 'Kt', range: ctx.rangeOf('Kt'), name: 'Kt' };
@@ -684,8 +688,11 @@ function reportNotes(
     const sev = n.severity ?? 'warning';
     if (sev === 'error') errors = true;
     if (OWN_CODES.has(n.code)) continue;
-    if (sev === 'information' || sev === 'hint') {
-      info.push(n);
+    // In a spectrum or history, loops too small to reach the curve's 1e12 reversals do no damage:
+    // said with the life, not as a warning (the loops that count are warned of by strain-life-range).
+    const quiet = n.code === 'strain-life-beyond' && loading.kind !== 'constant';
+    if (sev === 'information' || sev === 'hint' || quiet) {
+      info.push(quiet ? { ...n, severity: 'information' } : n);
       continue;
     }
     ctx.diag(sev, n.code, n.message, noteRange(ctx, n.code, loading, notch));
