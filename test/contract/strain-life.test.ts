@@ -333,6 +333,7 @@ describe('variable amplitude: rainflow with memory on the ASTM E1049 history', (
     // Every reversal and closure point of the path is drawn, the governing loop's two tips marked.
     expect(loops.match(/data-role="reversal"/g)?.length).toBe(c.strainLife?.points.length);
     expect(loops.match(/data-role="governing"/g)?.length).toBe(2);
+    expect(loops).toContain('data-role="governing-loop"');
     const curve = checkDiagrams(c)[1].svg;
     for (const role of ['total', 'elastic', 'plastic', 'transition', 'operating'])
       expect(curve, role).toContain(`data-role="${role}"`);

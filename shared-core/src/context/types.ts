@@ -170,6 +170,8 @@ export interface StrainLifeData {
     reversals: number | null;
     governing: boolean;
   }>;
+  /** The governing loop closed along its two Masing branches, [sigma, eps]. */
+  governingLoop: Array<[number, number]>;
   /** Strain-life curve without mean stress: [2N, total, elastic, plastic strain amplitude], 1 to 1e8 reversals. */
   curve: Array<[number, number, number, number]>;
   /** Transition life 2N_t (reversals) and the strain amplitude there. */

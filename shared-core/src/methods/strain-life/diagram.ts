@@ -35,8 +35,9 @@ export function hysteresisDiagram(data: StrainLifeData, options: DiagramOptions)
     .filter(([s, e]) => finite(s) && finite(e))
     .map(([s, e]) => [e * 100, s * k] as [number, number]);
   const pts = data.points.filter((p) => finite(p.sigma) && finite(p.eps));
-  const xs = [0, ...path.map((p) => p[0])];
-  const ys = [0, ...path.map((p) => p[1])];
+  const tips = data.governingLoop.map(([s, e]) => [e * 100, s * k] as [number, number]);
+  const xs = [0, ...path.map((p) => p[0]), ...tips.map((p) => p[0])].filter(finite);
+  const ys = [0, ...path.map((p) => p[1]), ...tips.map((p) => p[1])].filter(finite);
   const [x0, x1] = niceDomain(Math.min(...xs), Math.max(...xs), AXIS_TICKS);
   const [y0, y1] = niceDomain(Math.min(...ys), Math.max(...ys), AXIS_TICKS);
   const xAxis: Axis = { kind: 'linear', min: x0, max: x1 === x0 ? x0 + 1 : x1, label: 'local strain ε (%)' };
@@ -50,9 +51,13 @@ export function hysteresisDiagram(data: StrainLifeData, options: DiagramOptions)
   const rule = data.rule === 'glinka' ? 'Glinka' : 'Neuber';
   const items: LegendItem[] = [
     { className: 'fn-series fn-crack', label: `local path (${rule}, cyclic curve then Masing branches)` },
-    { className: 'fn-point-level', label: 'reversal points, numbered', marker: 'square' },
+    {
+      className: 'fn-point-level',
+      label: pts.length <= NUMBERED_POINTS ? 'reversal points, numbered' : 'reversal points',
+      marker: 'square',
+    },
   ];
-  if (gov) items.push({ className: 'fn-point', label: 'governing loop', marker: 'dot' });
+  if (gov) items.push({ className: 'fn-series fn-goodman fn-chosen', label: 'governing loop' });
   const f = frameFor(options, xAxis, yAxis, items);
   const heading = options.title ?? 'Notch-root hysteresis loops';
   const description =
@@ -76,6 +81,13 @@ export function hysteresisDiagram(data: StrainLifeData, options: DiagramOptions)
     parts.push(
       `<polyline class="fn-series fn-crack" data-role="path" points="${pointsAttr(path, sx, sy)}"/>`,
     );
+  const loop = data.governingLoop
+    .filter(([s, e]) => finite(s) && finite(e))
+    .map(([s, e]) => [e * 100, s * k] as [number, number]);
+  if (loop.length >= 2)
+    parts.push(
+      `<polyline class="fn-series fn-goodman fn-chosen" data-role="governing-loop" points="${pointsAttr(loop, sx, sy)}"/>`,
+    );
   pts.forEach((p, i) => {
     const X = sx(p.eps * 100);
     const Y = sy(p.sigma * k);
@@ -84,7 +96,7 @@ export function hysteresisDiagram(data: StrainLifeData, options: DiagramOptions)
         `point ${i + 1}: σ = ${formatNumber(p.sigma * k, digits)} ${unit.unit}, ε = ${formatNumber(p.eps * 100, digits)} %`,
       )}</title></rect>`,
     );
-    if (i < NUMBERED_POINTS) parts.push(pointLabel(f, X, Y, String(i + 1), 'fn-muted'));
+    if (pts.length <= NUMBERED_POINTS) parts.push(pointLabel(f, X, Y, String(i + 1), 'fn-muted'));
   });
   if (gov)
     for (const [e, s] of [
@@ -123,7 +135,7 @@ export function strainLifeDiagram(data: StrainLifeData, options: DiagramOptions)
   const yAxis: Axis = { kind: 'log', min: 10 ** yLo, max: 10 ** yHi, label: 'strain amplitude ε_a' };
   const items: LegendItem[] = [
     { className: 'fn-series fn-basquin fn-chosen', label: 'total (Coffin-Manson-Basquin, no mean stress)' },
-    { className: 'fn-series fn-goodman fn-extrapolated', label: "elastic (σf'/E)(2N)^b" },
+    { className: 'fn-series fn-gerber fn-extrapolated', label: "elastic (σf'/E)(2N)^b" },
     { className: 'fn-series fn-soderberg fn-extrapolated', label: "plastic εf'(2N)^c" },
     { className: 'fn-knee', label: `transition life 2N_t = ${formatCycles(data.transition)}` },
   ];
@@ -148,7 +160,7 @@ export function strainLifeDiagram(data: StrainLifeData, options: DiagramOptions)
     ))
       parts.push(`<polyline class="${cls}" data-role="${role}" points="${pointsAttr(run, sx, sy)}"/>`);
   };
-  line(2, 'fn-series fn-goodman fn-extrapolated', 'elastic');
+  line(2, 'fn-series fn-gerber fn-extrapolated', 'elastic');
   line(3, 'fn-series fn-soderberg fn-extrapolated', 'plastic');
   line(1, 'fn-series fn-basquin fn-chosen', 'total');
   if (finite(data.transition) && data.transition >= xAxis.min && data.transition <= xAxis.max)

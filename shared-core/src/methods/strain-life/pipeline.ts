@@ -38,6 +38,7 @@ import {
   estimateConstants,
   historyStrainLife,
   type MeanStressModel,
+  masingStrainRange,
   modelFormula,
   type NotchFactorKind,
   type NotchRule,
@@ -67,6 +68,8 @@ export const HISTORY_TURNING_POINTS_MAX = 4_194_304;
 const DRAWN_PATH_POINTS = 160;
 /** Samples per drawn branch. */
 const DRAWN_PER_SEGMENT = 12;
+/** Points of each branch of the drawn governing loop. */
+const LOOP_POINTS = 24;
 /** Points of the drawn strain-life curve (1 to 1e8 reversals). */
 const CURVE_POINTS = 49;
 
@@ -700,6 +703,24 @@ function reportNotes(
   return { errors, info };
 }
 
+/** The governing loop drawn closed: up its Masing branch from the lower tip, down the other from the upper. */
+function loopBranches(
+  g: { sigma_min: number; sigma_max: number; eps_min: number; eps_max: number },
+  m: StrainLifeMaterial,
+): Array<[number, number]> {
+  const out: Array<[number, number]> = [];
+  const d = g.sigma_max - g.sigma_min;
+  for (let i = 0; i <= LOOP_POINTS; i++) {
+    const x = (d * i) / LOOP_POINTS;
+    out.push([g.sigma_min + x, g.eps_min + masingStrainRange(m, x)]);
+  }
+  for (let i = 1; i <= LOOP_POINTS; i++) {
+    const x = (d * i) / LOOP_POINTS;
+    out.push([g.sigma_max - x, g.eps_max - masingStrainRange(m, x)]);
+  }
+  return out;
+}
+
 /** The drawing data: the local path along its branches, the loops and the strain-life curve. */
 function drawingData(
   res: NotchStrainLifeResult,
@@ -724,15 +745,19 @@ function drawingData(
     path: pathCurve(res.path, m, DRAWN_PER_SEGMENT).map(([s, e]) => [s, e]),
     points: res.path.points.map((p) => ({ S: p.S, sigma: p.sigma, eps: p.eps })),
     truncated: res.path.truncated,
-    loops: res.loops.slice(0, 64).map((lp, i) => ({
-      sigma_max: lp.sigma_max,
-      sigma_min: lp.sigma_min,
-      eps_max: lp.eps_max,
-      eps_min: lp.eps_min,
-      count: lp.count,
-      reversals: lp.status === 'finite' ? lp.reversals : null,
-      governing: i === res.governing,
-    })),
+    loops: res.loops
+      .map((lp, i) => ({ lp, i }))
+      .filter(({ i }) => i < 63 || i === res.governing)
+      .map(({ lp, i }) => ({
+        sigma_max: lp.sigma_max,
+        sigma_min: lp.sigma_min,
+        eps_max: lp.eps_max,
+        eps_min: lp.eps_min,
+        count: lp.count,
+        reversals: lp.status === 'finite' ? lp.reversals : null,
+        governing: i === res.governing,
+      })),
+    governingLoop: g ? loopBranches(g, m) : [],
     curve,
     transition: res.transition.value,
     operating: g ? { eps_a: g.eps_a, reversals, sigma_m: g.sigma_m } : null,
