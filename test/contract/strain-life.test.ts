@@ -497,6 +497,27 @@ describe('diagnostics on the right lines', () => {
     expect(rel(si(c, 'D_sum'), 1e7 / si(c, 'N_f'))).toBeLessThan(1e-12);
   });
 
+  it('options of other methods and N in a history are not used, and say so on their lines', () => {
+    const { c, text } = evaluate(
+      block(['Kt = 2', 'sigma_a = 200 MPa', 'surface: machined', 'criterion: goodman']),
+    );
+    const lines = c.diagnostics.filter((d) => d.code === 'ignored-input').map((d) => d.range.start.line);
+    expect(lines).toEqual([lineOf(text, 'surface:'), lineOf(text, 'criterion:')]);
+    expect(c.values.N_f.si).not.toBeNull();
+  });
+
+  it('a history with more peaks than the local path keeps is an error on the history line, never a throw', () => {
+    const big = ['s', ...Array.from({ length: 140_000 }, (_, i) => (i % 2 ? '100' : '-100'))].join('\n');
+    const { c, text } = evaluate(
+      block(['Kt = 2'], ['history: loads/big.csv', 'history_scale = 1 MPa']),
+      memoryReader({ 'loads/big.csv': big }),
+    );
+    const d = diag(c, 'history-too-many-peaks');
+    expect(d.severity).toBe('error');
+    expect(d.range.start.line).toBe(lineOf(text, 'history:'));
+    expect(c.values.N_f).toBeUndefined();
+  });
+
   it('bad constants: an error on their line, never NaN', () => {
     const lines = block(['Kt = 2', 'sigma_a = 200 MPa']).map((l) =>
       l.startsWith('c_coffin') ? 'c_coffin = 0.5' : l,

@@ -62,8 +62,8 @@ export const MEAN_STRESS_WORDS: Readonly<Record<string, MeanStressModel>> = Obje
   swt: 'swt',
 });
 
-/** Turning points of a history kept for the local path (each a number): 2^22, 32 MiB. */
-export const HISTORY_TURNING_POINTS_MAX = 4_194_304;
+/** Turning points of a history kept for the local path: 2^17 (the trace of so many takes about 1.5 s and 150 MB). */
+export const HISTORY_TURNING_POINTS_MAX = 131_072;
 /** Path points kept for drawing the loops. */
 const DRAWN_PATH_POINTS = 160;
 /** Samples per drawn branch. */
@@ -791,6 +791,23 @@ export function runStrainLife(ctx: CheckContext): MethodExtras {
 
   const N = ctx.input('N');
   const passesIn = ctx.input('passes');
+  if (loading.kind !== 'constant' && ctx.has('N'))
+    ctx.diag(
+      'warning',
+      'ignored-input',
+      `\`N\` is not used in a ${loading.kind} check: the service is \`passes\` of the ${loading.kind} (\`D_sum\`), the life \`N_f\` is in cycles`,
+      ctx.rangeOf('N'),
+    );
+  for (const key of ['surface', 'rotation', 'criterion', 'miner'])
+    if (ctx.options.has(key))
+      ctx.diag(
+        'warning',
+        'ignored-input',
+        key === 'surface'
+          ? '`surface:` is not used by the strain-life method: its constants are those of polished specimens, and a rough surface shortens long lives (state constants measured on the finish, or check long lives with `method: stress-life`)'
+          : `\`${key}:\` is not used by the strain-life method (\`mean-stress:\` chooses the correction of the strain-life curve)`,
+        ctx.optionRange(key),
+      );
   if (loading.kind === 'constant' && ctx.has('passes'))
     ctx.diag(
       'warning',
