@@ -11,6 +11,7 @@
  * Morrow and Smith-Watson-Topper (Dowling Ch. 14; Bannantine, Comer & Handrock, Fundamentals of
  * Metal Fatigue Analysis, 1990, Ch. 2, from memory for the chapter).
  */
+import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
@@ -527,5 +528,55 @@ describe('diagnostics on the right lines', () => {
     expect(d.range.start.line).toBe(lineOf(text, 'sigma_f_prime'));
     expectAllFinite(c);
     expect(c.values.N_f).toBeUndefined();
+  });
+});
+
+describe('test/fixtures/strain-life-mistakes.md: each mistake on its line', () => {
+  const text = readFileSync(new URL('../fixtures/strain-life-mistakes.md', import.meta.url), 'utf8');
+  const lines = text.split('\n');
+  const result = evaluateNote(text);
+  const check = (id: string) => result.checks.find((c) => c.id === id)!;
+  /** 0-based line of the first line after the check's fence that starts with `prefix`. */
+  const at = (id: string, prefix: string) => {
+    const fence = lines.findIndex((l) => l === `\`\`\`fatigue ${id}`);
+    const i = lines.findIndex((l, k) => k > fence && l.startsWith(prefix));
+    if (fence < 0 || i < 0) throw new Error(`no ${prefix} in ${id}`);
+    return i;
+  };
+  const has = (id: string, code: string, prefix: string, severity: string) => {
+    const d = check(id).diagnostics.find((x) => x.code === code);
+    expect(d, `${id}: ${code}`).toBeDefined();
+    expect(d!.range.start.line, `${id}: ${code}`).toBe(at(id, prefix));
+    expect(d!.severity).toBe(severity);
+  };
+
+  it('constants forgotten: error on the material line, no life', () => {
+    has('no_constants', 'missing-cyclic-constants', 'material:', 'error');
+    expect(check('no_constants').values.N_f).toBeUndefined();
+  });
+  it('general yielding: error on the sigma_max line, the requirement not evaluated', () => {
+    has('general_yield', 'general-yield', 'sigma_max', 'error');
+    has('general_yield', 'requirement-not-evaluated', 'require:', 'error');
+  });
+  it('an estimate: the named warning and the assumed family on the estimate line, with a life', () => {
+    has('estimated', 'cyclic-estimate', 'estimate:', 'warning');
+    has('estimated', 'assumed-steel', 'estimate:', 'warning');
+    expect(check('estimated').values.N_f.si).not.toBeNull();
+  });
+  it('a misspelt mean-stress word: error on it with the words listed, results withheld', () => {
+    has('misspelt_model', 'unknown-option-value', 'mean-stress:', 'error');
+    expect(check('misspelt_model').values.N_f).toBeUndefined();
+  });
+  it('Kf stated: says so on its line; a long life: strain-life-beyond on the load line; surface not used', () => {
+    has('kf_stated_long_life', 'notch-factor', 'Kf', 'information');
+    has('kf_stated_long_life', 'strain-life-beyond', 'sigma_max', 'warning');
+    has('kf_stated_long_life', 'ignored-input', 'surface:', 'warning');
+    expect(check('kf_stated_long_life').values.N_f.infinite).toBe(true);
+  });
+  it('US units with a compressive mean: passes, in ksi, Morrow credits the compressive mean (said with N_f)', () => {
+    const c = check('ksi_note');
+    expect(c.status).toBe('pass');
+    expect(c.values.sigma_m_local.display).toMatch(/-.*ksi/);
+    expect(c.values.N_f.notes?.some((n) => /Compressive local mean/.test(n))).toBe(true);
   });
 });
