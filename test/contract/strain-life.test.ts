@@ -519,6 +519,17 @@ describe('diagnostics on the right lines', () => {
     expect(c.values.N_f).toBeUndefined();
   });
 
+  it('a static load: information on the load line, N_f infinite; Kt below 1: an error on the Kt line', () => {
+    const { c, text } = evaluate(block(['Kt = 2', 'sigma_max = 200 MPa', 'sigma_min = 200 MPa']));
+    expect(diag(c, 'no-stress-range').range.start.line).toBe(lineOf(text, 'sigma_max'));
+    expect(c.values.N_f.infinite).toBe(true);
+    const k = evaluate(block(['Kt = 0.8', 'sigma_a = 200 MPa']));
+    const errs = k.c.diagnostics.filter((d) => d.severity === 'error');
+    expect(errs.length).toBeGreaterThan(0);
+    expect(errs.every((d) => d.range.start.line === lineOf(k.text, 'Kt'))).toBe(true);
+    expect(k.c.values.N_f).toBeUndefined();
+  });
+
   it('bad constants: an error on their line, never NaN', () => {
     const lines = block(['Kt = 2', 'sigma_a = 200 MPa']).map((l) =>
       l.startsWith('c_coffin') ? 'c_coffin = 0.5' : l,
@@ -538,7 +549,7 @@ describe('test/fixtures/strain-life-mistakes.md: each mistake on its line', () =
   const check = (id: string) => result.checks.find((c) => c.id === id)!;
   /** 0-based line of the first line after the check's fence that starts with `prefix`. */
   const at = (id: string, prefix: string) => {
-    const fence = lines.findIndex((l) => l === `\`\`\`fatigue ${id}`);
+    const fence = lines.indexOf(`\`\`\`fatigue ${id}`);
     const i = lines.findIndex((l, k) => k > fence && l.startsWith(prefix));
     if (fence < 0 || i < 0) throw new Error(`no ${prefix} in ${id}`);
     return i;

@@ -653,7 +653,14 @@ function readLoading(ctx: CheckContext): Loading | null {
 }
 
 /** The line each of the core's notes is about. */
-function noteRange(ctx: CheckContext, code: string, loading: Loading, notch: NotchRead): Range {
+function noteRange(
+  ctx: CheckContext,
+  code: string,
+  message: string,
+  loading: Loading,
+  notch: NotchRead,
+): Range {
+  if (code === 'invalid-input' && /concentration factor/.test(message)) return notch.range;
   if (CURVE_CODES.has(code))
     return ctx.has('K_prime')
       ? ctx.rangeOf('K_prime')
@@ -698,7 +705,7 @@ function reportNotes(
       info.push(quiet ? { ...n, severity: 'information' } : n);
       continue;
     }
-    ctx.diag(sev, n.code, n.message, noteRange(ctx, n.code, loading, notch));
+    ctx.diag(sev, n.code, n.message, noteRange(ctx, n.code, n.message, loading, notch));
   }
   return { errors, info };
 }
@@ -842,7 +849,20 @@ export function runStrainLife(ctx: CheckContext): MethodExtras {
   ctx.result('two_N_t', bare(res.transition), constIn, {
     range: ctx.optionRange('material') ?? ctx.rangeOf('c_coffin'),
   });
-  if (errors || res.governing < 0) return {};
+  if (errors) return {};
+  if (res.governing < 0) {
+    // A static load (no range): no loop, no fatigue damage; the life is unbounded.
+    ctx.diag(
+      'information',
+      'no-stress-range',
+      'the nominal stress does not change: a static load, no hysteresis loop and no fatigue damage (N_f infinite)',
+      loading.range,
+    );
+    ctx.result('N_f', { ...res.N_f, notes: [] }, [...mat.inputs, notch.name, ...loading.inputs], {
+      range: loading.range,
+    });
+    return {};
+  }
 
   const notchIn = [...mat.inputs, notch.name, ...loading.inputs];
   const modelIn = [...notchIn];
