@@ -199,6 +199,13 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
   let c = stated.c_coffin;
   let K = stated.K_prime;
   let n = stated.n_prime;
+  if (estimateWord !== undefined && missing.length === 0 && K !== undefined && n !== undefined)
+    ctx.diag(
+      'warning',
+      'ignored-input',
+      `every constant is stated (or from the library): \`estimate: ${estimateWord}\` is not used`,
+      estimateStmt!.whole,
+    );
   if (missing.length > 0 || (estimateWord !== undefined && (K === undefined || n === undefined))) {
     if (estimateWord === undefined) {
       if (estimateStmt) return null; // a misspelt word: already diagnosed
