@@ -530,6 +530,13 @@ describe('diagnostics on the right lines', () => {
     expect(k.c.values.N_f).toBeUndefined();
   });
 
+  it('K_prime without n_prime: an error on its line (no curve mixed from a measured and a compatible constant)', () => {
+    const lines = block(['Kt = 2', 'sigma_a = 200 MPa']).filter((l) => !l.startsWith('n_prime'));
+    const { c, text } = evaluate(lines);
+    expect(diag(c, 'missing-cyclic-constants').range.start.line).toBe(lineOf(text, 'K_prime'));
+    expect(c.values.N_f).toBeUndefined();
+  });
+
   it('bad constants: an error on their line, never NaN', () => {
     const lines = block(['Kt = 2', 'sigma_a = 200 MPa']).map((l) =>
       l.startsWith('c_coffin') ? 'c_coffin = 0.5' : l,

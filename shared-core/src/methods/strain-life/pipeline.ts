@@ -28,6 +28,7 @@ import { readSpectrumLevels } from '../../checks/spectrumLevels';
 import { type Computed, computed, type MethodNote, type Term } from '../../computed';
 import type { CheckContext } from '../../context/checkContext';
 import type { Range, Severity, StrainLifeData } from '../../context/types';
+import { nameInfo } from '../../context/vocabulary';
 import { FAMILIES, type MaterialClass } from '../../materials';
 import { HistoryCsvReader, type HistoryIssue, TurningPointDetector } from '../../rainflow';
 import {
@@ -283,7 +284,7 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
       ctx.result(name, quiet(x), estInputs, {
         range,
         origin: 'computed',
-        meaning: `${ctx.values[name]?.meaning ?? name} (estimated: ${estimateWord})`,
+        meaning: `${nameInfo(name)?.meaning ?? name} (estimated: ${estimateWord})`,
       }) ?? undefined;
     sf = sf ?? put('sigma_f_prime', est.sigma_f_prime);
     b = b ?? put('b_basquin', est.b);
@@ -294,6 +295,17 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
   }
   if (E === undefined || sf === undefined || b === undefined || ef === undefined || c === undefined)
     return null;
+  if ((K === undefined) !== (n === undefined)) {
+    const have = K === undefined ? 'n_prime' : 'K_prime';
+    const lack = K === undefined ? 'K_prime' : 'n_prime';
+    ctx.diag(
+      'error',
+      'missing-cyclic-constants',
+      `state \`${lack}\` with \`${have}\`: the cyclic curve needs both of one measured set (or neither: then both follow from the strain-life constants by compatibility)`,
+      ctx.rangeOf(have),
+    );
+    return null;
+  }
   if (K === undefined || n === undefined) {
     const cc = compatibleCyclicCurve({ E, sigma_f_prime: sf, b, eps_f_prime: ef, c });
     const bad = (cc.K_prime.notes ?? []).some((x) => x.severity === 'error');
