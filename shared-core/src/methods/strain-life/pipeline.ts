@@ -69,6 +69,8 @@ export const HISTORY_TURNING_POINTS_MAX = 131_072;
 const DRAWN_PATH_POINTS = 160;
 /** Samples per drawn branch. */
 const DRAWN_PER_SEGMENT = 12;
+/** Steps of the local path shown with eps_a. */
+const STEPS_SHOWN = 24;
 /** Points of each branch of the drawn governing loop. */
 const LOOP_POINTS = 24;
 /** Points of the drawn strain-life curve (1 to 1e8 reversals). */
@@ -886,7 +888,19 @@ export function runStrainLife(ctx: CheckContext): MethodExtras {
   const notchIn = [...mat.inputs, notch.name, ...loading.inputs];
   const modelIn = [...notchIn];
   const r = loading.range;
-  ctx.result('eps_a', bare(res.eps_a), notchIn, { range: r });
+  // The local path point by point is the derivation of eps_a: its steps ride on it as remarks.
+  const steps = res.steps.slice(0, STEPS_SHOWN);
+  if (res.steps.length > STEPS_SHOWN)
+    steps.push(`... ${res.steps.length - STEPS_SHOWN} more points of the path (every loop is counted)`);
+  ctx.result(
+    'eps_a',
+    {
+      ...res.eps_a,
+      notes: steps.map((message) => ({ code: 'path-step', severity: 'information', message })),
+    },
+    notchIn,
+    { range: r },
+  );
   ctx.result('sigma_max_local', bare(res.sigma_max), notchIn, { range: r });
   const g = res.loops[res.governing];
   ctx.result(
