@@ -135,6 +135,12 @@ export function renderCheck(c: SummaryCheck, esc: (s: string) => string): string
           first ? `: ${esc(first)}` : ''
         }</p>`
       : '';
+  const warned = (c.diagnostics?.firstWarnings ?? []).filter((m) => typeof m === 'string');
+  const warningList = warned.length
+    ? `<ul class="fatigue-notes-warnings">${warned.map((m) => `<li>⚠ ${esc(m)}</li>`).join('')}${
+        warnings > warned.length ? `<li>… ${warnings - warned.length} more in the editor</li>` : ''
+      }</ul>`
+    : '';
   return (
     `<div class="fatigue-notes-result fatigue-notes-${c.status}" data-check="${esc(c.id ?? '')}">` +
     `<div class="fatigue-notes-head"><span class="fatigue-notes-badge">${STATUS[c.status]}</span> ` +
@@ -142,6 +148,7 @@ export function renderCheck(c: SummaryCheck, esc: (s: string) => string): string
     (rows.length ? `<table class="fatigue-notes-table"><tbody>${rows.join('')}</tbody></table>` : '') +
     (reqs.length ? `<ul class="fatigue-notes-reqs">${reqs.join('')}</ul>` : '') +
     problems +
+    warningList +
     '</div>'
   );
 }

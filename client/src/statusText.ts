@@ -11,10 +11,15 @@ export function statusText(s: { checks: readonly SummaryCheck[] }): {
   const counts = countByStatus(s.checks);
   const worst = worstSafetyFactor(s.checks);
   const alarm = counts.fail > 0 || counts.error > 0;
-  const icon = counts.error > 0 ? '$(error)' : counts.fail > 0 ? '$(warning)' : '$(pass)';
+  // A factor below 1 is never shown beside a tick, whatever the requirements say.
+  const below = worst !== null && worst.value < 1;
+  const icon = counts.error > 0 ? '$(error)' : counts.fail > 0 || below ? '$(warning)' : '$(pass)';
+  // The icon speaks of the checks' status; say which, so that it is not read as the factor's.
+  const status =
+    counts.error > 0 ? `${counts.error} with errors · ` : counts.fail > 0 ? `${counts.fail} failed · ` : '';
   const text = worst
-    ? `${icon} lowest safety factor ${worst.display}`
-    : `${icon} ${s.checks.length} check${s.checks.length === 1 ? '' : 's'}`;
+    ? `${icon} ${status}lowest safety factor ${worst.display}${below ? ' (below 1)' : ''}`
+    : `${icon} ${status}${s.checks.length} check${s.checks.length === 1 ? '' : 's'}`;
   const parts = [
     `${s.checks.length} check${s.checks.length === 1 ? '' : 's'}: ${counts.pass} pass, ${counts.fail} fail, ${counts.error} with errors, ${counts.unchecked} without a requirement`,
   ];

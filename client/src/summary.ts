@@ -15,7 +15,7 @@ export interface SummaryParams {
 
 /** A check's record; the server adds what each view shows, the diagrams and the counts of its diagnostics. */
 export type SummaryCheck = Omit<CheckResult, 'diagnostics' | 'insertLine'> & {
-  diagnostics?: { errors: number; warnings: number; firstError?: string };
+  diagnostics?: { errors: number; warnings: number; firstError?: string; firstWarnings?: string[] };
   /** The names of `values` each view shows (the core's one list, sent by the server). */
   shown?: { headline: string[]; table: string[]; life: string | null };
   /** The check's diagrams as SVG text, drawn by the server. */

@@ -95,9 +95,9 @@ describe('panel model', () => {
     ]);
   });
 
-  it('names the life column from the server: damage D for a damage check, N_cg for crack growth', () => {
+  it('names the life column from the server: damage D_sum for a damage check, N_cg for crack growth', () => {
     const damage = serverSummary(DAMAGE);
-    expect(buildRows(damage)[0].life).toMatchObject({ name: 'D', text: damage[0].values.D.display });
+    expect(buildRows(damage)[0].life).toMatchObject({ name: 'D_sum', text: damage[0].values.D_sum.display });
     const crack = serverSummary(CRACK);
     expect(buildRows(crack)[0].life).toMatchObject({ name: 'N_cg', text: crack[0].values.N_cg.display });
   });
@@ -127,10 +127,22 @@ describe('status bar text', () => {
     expect(worst.value).toBe(Math.min(...all));
     expect(worst).toMatchObject({ name: 'n_f', check: 'lever_arm' });
     const t = statusText({ checks });
-    expect(t.text).toBe(`$(warning) lowest safety factor ${worst.display}`);
+    expect(t.text).toBe(
+      `$(warning) 1 failed · lowest safety factor ${worst.display}${worst.value < 1 ? ' (below 1)' : ''}`,
+    );
     expect(t.alarm).toBe(true);
     expect(t.tooltip).toContain('1 pass, 1 fail');
     expect(statusText({ checks: serverSummary(CONTRACT) }).alarm).toBe(false);
+  });
+
+  it('never shows a tick beside a safety factor below 1', () => {
+    // A check without a requirement on n_f (status unchecked or pass on another value).
+    const checks = serverSummary(CONTRACT).map((c) => ({
+      ...c,
+      values: { ...c.values, n_f: { ...c.values.n_f, si: 0.9989, display: '0.9989' } },
+    }));
+    const t = statusText({ checks: checks.map((c) => ({ ...c, status: 'pass' as const })) });
+    expect(t.text).toBe('$(warning) lowest safety factor 0.9989 (below 1)');
   });
 });
 
@@ -214,6 +226,22 @@ describe('Markdown preview plugin', () => {
     expect(html).toContain('<pre data-info="js"></pre>\n<pre');
   });
 
+  it('states the warnings of a check under it, not only their count', () => {
+    const md = fakeMarkdownIt();
+    // No temperature stated: the defaulted-temperature warning (docs/diagnostics.md).
+    const note = CONTRACT.replace(/^temp = .*\n/m, '');
+    const summary = serverSummary(note);
+    fatiguePreviewPlugin(
+      md,
+      () => ({ enabled: true }),
+      () => ({ state: 'ready', checks: summary }),
+    );
+    const html = md.render(note);
+    expect(summary[0].diagnostics?.firstWarnings?.join(' ')).toMatch(/room temperature assumed/);
+    expect(html).toContain('fatigue-notes-warnings');
+    expect(html).toMatch(/⚠ no operating temperature: room temperature assumed/);
+  });
+
   it('says "evaluating…" under every block until the results of this version are in, and numbers none', () => {
     const md = fakeMarkdownIt();
     fatiguePreviewPlugin(
@@ -254,7 +282,7 @@ describe('Markdown preview plugin', () => {
     checks = damage;
     const html = md.render(DAMAGE);
     expect(html).toContain(
-      `<th scope="row"><code>D</code></th><td class="fatigue-notes-num">${damage[0].values.D.display}</td>`,
+      `<th scope="row"><code>D_sum</code></th><td class="fatigue-notes-num">${damage[0].values.D_sum.display}</td>`,
     );
   });
 });

@@ -3,6 +3,7 @@ import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
+import { methods } from '@fatigue-notes/core';
 import Ajv from 'ajv';
 import { beforeAll, describe, expect, it } from 'vitest';
 
@@ -59,6 +60,20 @@ describe('fatigue-notes check', () => {
     expect(run(['check', 'samples', '--format', 'xml']).status).toBe(2);
     expect(run(['check', 'no/such/file.md']).status).toBe(2);
     expect(run(['frobnicate']).status).toBe(2);
+    // `lsp` without a transport, or asked for its version or usage: an answer, never a trace.
+    const version = run(['lsp', '--version']);
+    expect(version.status).toBe(0);
+    expect(version.stdout.trim()).toMatch(/^\d+\.\d+\.\d+/);
+    expect(run(['lsp', '--help']).stdout).toContain('fatigue-notes lsp --stdio');
+    // A folder with no note: an error a CI job sees, not an empty pass.
+    const empty = mkdtempSync(join(tmpdir(), 'fn-empty-'));
+    const none = run(['check', empty]);
+    expect(none.status).toBe(2);
+    expect(none.stderr).toContain('no Markdown note');
+    const bare = run(['lsp']);
+    expect(bare.status).toBe(2);
+    expect(bare.stderr).toContain('say how the editor talks to the server');
+    expect(bare.stderr).not.toMatch(/at .*\.js:\d+/);
   });
   it('JSON output validates against server/schema/check-output.schema.json', () => {
     const schema = JSON.parse(readFileSync(join(root, 'server/schema/check-output.schema.json'), 'utf8'));
@@ -68,6 +83,9 @@ describe('fatigue-notes check', () => {
       const out = JSON.parse(r.stdout);
       expect(validate(out), JSON.stringify(validate.errors)).toBe(true);
     }
+    // The schema names no method: every registered method's name fits its pattern.
+    const pattern = new RegExp(schema.definitions.check.properties.method.pattern);
+    for (const m of methods()) expect(m.name).toMatch(pattern);
   });
   it('JSON carries the contract fields: SI values, infinite lives, 1-based positions', () => {
     const out = JSON.parse(run(['check', 'test/fixtures/contract-example.md', '--format', 'json']).stdout);

@@ -159,7 +159,13 @@ describe('inlay hints and diagnostics', () => {
       start: { line: 0, character: 0 },
       end: { line: lines.length, character: 0 },
     });
-    const at = (n: number) => hints.filter((h) => h.position.line === n).map((h) => String(h.label));
+    // One hint per value, read as the editor shows them side by side.
+    const at = (n: number) => [
+      hints
+        .filter((h) => h.position.line === n)
+        .map((h) => String(h.label))
+        .join(' '),
+    ];
     const [plain, fillet] = lines.flatMap((l, i) => (l === 'Kt = 1.85' ? [i] : []));
     // No stress raiser stated: Kt = 1 by definition of the elastic stress concentration.
     expect(at(plain)).toEqual([

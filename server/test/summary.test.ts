@@ -70,12 +70,12 @@ describe('fatigue/summary of an open note', () => {
     const fromCli = cli.checks.find((c) => c.id === 'hub_fillet_logged')!;
     // Counted from the CSV file by the server, as by `fatigue-notes check`.
     expect(logged.values.cycles_counted.display).toBe(fromCli.values.cycles_counted.display);
-    expect(logged.values.D.display).toBe(fromCli.values.D.display);
+    expect(logged.values.D_sum.display).toBe(fromCli.values.D_sum.display);
     expect(logged.diagnostics.errors).toBe(0);
     expect(logged.diagrams.map((d) => d.kind)).toContain('histogram');
     const html = renderCheck(logged, esc);
     expect(html).toContain(
-      `<th scope="row"><code>D</code></th><td class="fatigue-notes-num">${fromCli.values.D.display}</td>`,
+      `<th scope="row"><code>D_sum</code></th><td class="fatigue-notes-num">${fromCli.values.D_sum.display}</td>`,
     );
     expect(html).toContain(
       `<th scope="row"><code>repeats</code></th><td class="fatigue-notes-num">${fromCli.values.repeats.display}</td>`,

@@ -2,7 +2,16 @@
 export * from './computed';
 export type { HistoryChunkReader } from './context/checkContext';
 export * from './context/types';
-export { editDistance, INPUT_NAMES, nameInfo, nearest, OPTIONS, RESULT_NAMES } from './context/vocabulary';
+export {
+  editDistance,
+  INPUT_NAMES,
+  nameInfo,
+  nearest,
+  OPTIONS,
+  optionInfo,
+  RESULT_NAMES,
+  wordOwners,
+} from './context/vocabulary';
 export {
   centreCrackFiniteWidth,
   constantGeometry,

@@ -197,3 +197,38 @@ describe('a pass that hides a finite life', () => {
     expect(safe.diagnostics.some((x) => x.code === 'hidden-finite-life')).toBe(false);
   });
 });
+
+describe('stated factors beyond their published bounds withhold the results (each bound named)', () => {
+  // Kf = 1 + q (Kt - 1), Kt >= 1, 0 <= q <= 1 (Shigley's MED Eq. 6-32): Kf >= 1; a smaller
+  // value credits the notch with strength, an unconservative factor.
+  for (const line of ['Kf = 0.5', 'Kf = 1e-300', 'Kt = 0.6']) {
+    it(`${line}: absurd-value error on its line, no safety factor`, () => {
+      const { c } = withheld(shaft({ feature: null }, [line]), 'absurd-value');
+      expect(c.values.n_f).toBeUndefined();
+    });
+  }
+  it('Kfs = 0.1 in a shaft under torque: error, no safety factor', () => {
+    const { c } = withheld(shaft({ feature: null }, ['T_a = 100 N*m', 'Kfs = 0.1']), 'absurd-value');
+    expect(c.values.n_f).toBeUndefined();
+  });
+  // Marin factors: ka <= 1 (Table 6-2, capped), kb <= 1.11 (Eq. 6-20 at d = 2.79 mm), kc <= 1
+  // (Eq. 6-26), kd <= 1.025 (Eq. 6-27's largest value, near 263 degF), ke <= 1 (Table 6-5).
+  for (const line of ['ka = 3', 'kb = 2', 'kc = 1.2', 'kd = 1.1', 'ke = 1.05', 'kmisc = 10']) {
+    it(`${line}: absurd-value error, results withheld`, () => {
+      const { c } = withheld(shaft({}, [line]), 'absurd-value');
+      expect(c.values.n_f).toBeUndefined();
+    });
+  }
+  it('values inside the bounds stay: kb = 1.1 (Eq. 6-20 at 3 mm), kd = 1.02 (Eq. 6-27 at 200 degF)', () => {
+    const c = check(shaft({}, ['kb = 1.1', 'kd = 1.02']));
+    expect(c.diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
+    expect(si(c, 'kb')).toBe(1.1);
+  });
+  it('kmisc = 1.3 (a claimed benefit) is a warning that asks for test data, not an error', () => {
+    const c = check(shaft({}, ['kmisc = 1.3']));
+    const d = c.diagnostics.find((x) => x.code === 'absurd-value');
+    expect(d?.severity).toBe('warning');
+    expect(d?.message).toMatch(/fatigue tests/);
+    expect(c.values.n_f).toBeDefined();
+  });
+});

@@ -58,7 +58,7 @@ export function panelHtml(p: PanelPage): string {
           <th scope="col" data-col="criterion" aria-sort="none"><button type="button">Criterion</button></th>
           <th scope="col" data-col="n_f" class="num" aria-sort="none"><button type="button" title="n_f: fatigue safety factor (chosen criterion and load line)">n<sub>f</sub> fatigue</button></th>
           <th scope="col" data-col="n_y" class="num" aria-sort="none"><button type="button" title="n_y: first-cycle yield safety factor (Langer)">n<sub>y</sub> yield</button></th>
-          <th scope="col" data-col="life" class="num" aria-sort="none"><button type="button" title="N_f: cycles to failure; D: Miner damage of one pass; N_cg: crack-growth cycles">Life or damage</button></th>
+          <th scope="col" data-col="life" class="num" aria-sort="none"><button type="button" title="the life or damage result the check's method names: N_f cycles to failure, D_sum Miner damage of one pass, N_cg crack-growth cycles ...">Life or damage</button></th>
           <th scope="col" data-col="status" aria-sort="none"><button type="button">Status</button></th>
         </tr></thead>
         <tbody id="rows"></tbody>

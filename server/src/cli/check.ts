@@ -80,6 +80,11 @@ export async function runCheckCommand(args: string[], io: Io): Promise<number> {
       return 2;
     }
   }
+  if (files.length === 0) {
+    // A CI job pointed at the wrong folder must not pass.
+    io.stderr(`fatigue-notes check: no Markdown note (*.md) in ${paths.join(', ')}\n`);
+    return 2;
+  }
   const reports: FileReport[] = [];
   for (const f of files) {
     let result: NoteResult;
@@ -89,7 +94,9 @@ export async function runCheckCommand(args: string[], io: Io): Promise<number> {
       io.stderr(`fatigue-notes check: cannot read ${f}: ${(e as Error).message}\n`);
       return 2;
     }
-    reports.push({ path: relative(io.cwd, f) || f, result });
+    // Inside the working folder as a relative path, elsewhere as given in full.
+    const rel = relative(io.cwd, f);
+    reports.push({ path: rel && !rel.startsWith('..') ? rel : f, result });
   }
   const failed = reports.some(
     (r) =>

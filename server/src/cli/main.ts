@@ -21,6 +21,11 @@ usage:
 The tool assists a qualified engineer; local codes, standards and licensed practice govern.
 `;
 
+const LSP_USAGE = `usage: fatigue-notes lsp --stdio
+  Runs the language server over standard input and output (an editor starts it; see README).
+  Also --node-ipc, --socket=PORT or --pipe=NAME, as vscode-languageserver accepts them.
+`;
+
 export async function main(argv: string[], io: Io): Promise<number> {
   const [cmd, ...rest] = argv;
   switch (cmd) {
@@ -33,6 +38,24 @@ export async function main(argv: string[], io: Io): Promise<number> {
     case 'compare':
       return runCompareCommand(rest, io);
     case 'lsp':
+      if (rest.includes('--version') || rest.includes('-v')) {
+        io.stdout(`${VERSION}\n`);
+        return 0;
+      }
+      if (rest.includes('--help') || rest.includes('-h')) {
+        io.stdout(LSP_USAGE);
+        return 0;
+      }
+      // The connection needs its transport named; without one it would throw.
+      if (
+        !rest.some(
+          (a) =>
+            a === '--stdio' || a === '--node-ipc' || a.startsWith('--socket=') || a.startsWith('--pipe='),
+        )
+      ) {
+        io.stderr(`fatigue-notes lsp: say how the editor talks to the server\n${LSP_USAGE}`);
+        return 2;
+      }
       // A static import: a dynamic import() makes the bundler wrap every module in a lazy
       // initialiser, which defeats tree-shaking (platform-notes.md).
       startServer();

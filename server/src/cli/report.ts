@@ -99,7 +99,7 @@ export async function runReportCommand(args: string[], io: Io): Promise<number> 
   const tally = { pass: 0, fail: 0, error: 0, unchecked: 0 };
   for (const c of result.checks) tally[c.status]++;
   io.stdout(
-    `wrote ${relative(io.cwd, outPath) || outPath}: ${result.checks.length} check(s): ${tally.pass} pass, ${tally.fail} fail, ${tally.error} error, ${tally.unchecked} unchecked\n`,
+    `wrote ${relative(io.cwd, outPath).startsWith('..') ? outPath : relative(io.cwd, outPath) || outPath}: ${result.checks.length} check(s): ${tally.pass} pass, ${tally.fail} fail, ${tally.error} error, ${tally.unchecked} unchecked\n`,
   );
   return 0;
 }

@@ -13,8 +13,10 @@ import {
   headlineValues,
   nameInfo,
   OPTIONS,
+  optionInfo,
   type Position,
   type Value,
+  wordOwners,
 } from '@fatigue-notes/core';
 import { type Hover, MarkupKind, type Range } from 'vscode-languageserver/node';
 import { checkAt, checkById, contains, type NoteView, statementOn, type Word, wordAt } from './locate';
@@ -104,11 +106,21 @@ function describeWord(
       };
     }
   }
-  if (v) return { markdown: derivation(v, digits), range: wordRange(word.start, word.end) };
-  const info = nameInfo(name);
+  const owners = wordOwners(name);
+  const foreign = owners && !owners.includes(check.method);
+  const whose = foreign
+    ? ` A word of ${owners.map((m) => `\`method: ${m}\``).join(' or ')} checks: this check does not read it.`
+    : '';
+  if (v)
+    return {
+      markdown: `${derivation(v, digits)}${whose ? `\n\n${whose.trim()}` : ''}`,
+      range: wordRange(word.start, word.end),
+    };
+  const info = nameInfo(name, check.method);
+  const elsewhere = whose || ' Not available in this check.';
   if (info)
     return {
-      markdown: `**\`${name}\`**: ${info.meaning} (${DIM_LABEL[info.dim]}). Not available in this check.`,
+      markdown: `**\`${name}\`**: ${info.meaning} (${DIM_LABEL[info.dim]}).${elsewhere}`,
       range: wordRange(word.start, word.end),
     };
   return undefined;
@@ -156,7 +168,7 @@ export function checkSummary(c: CheckResult): string {
 }
 
 function optionKeyDoc(key: string, check: CheckResult, line: number): string {
-  const info = OPTIONS[key];
+  const info = optionInfo(key, check.method);
   if (!info) return `\`${key}:\` is not an option of a fatigue check.`;
   const out = [`**\`${key}:\`** ${info.meaning}`];
   if (info.values)

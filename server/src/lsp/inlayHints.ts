@@ -1,8 +1,10 @@
 /**
  * Inline results: beside each line, the values that line drives (`q`, `Kf` beside the notch
- * radius, `kb` beside `d`, `ka` beside `surface:`), the key results beside `criterion:`
- * (`n_f`, `n_y`, `N_f`, or `D`, `N_cg` ...), each requirement's actual value and verdict
- * beside its `require:` item, and the tool's own value beside a value the note overrides.
+ * radius, `kb` beside `d`, `ka` beside `surface:`), the key results beside the line that
+ * drives them (`n_f`, `n_y`, `N_f` beside `criterion:`; `D_sum`, `repeats` beside `history:`
+ * or the spectrum; `N_cg` ...), each requirement's actual value and verdict beside its
+ * `require:` item, and the tool's own value beside a value the note overrides. Each value
+ * is a hint of its own, so that an editor's length limit never cuts the later ones off.
  */
 import { type CheckResult, headlineRank, type Range, type Value } from '@fatigue-notes/core';
 import { type InlayHint, InlayHintKind } from 'vscode-languageserver/node';
@@ -48,18 +50,30 @@ function hintsOfCheck(view: NoteView, c: CheckResult, range: Range, out: InlayHi
         : `${v.name} ${v.display}${v.unused ? ' (not used)' : ''}`,
     );
     if (ranked.length > shown.length) parts.push('… more in the hover');
-    out.push({
-      position: { line, character: view.line(line).length },
-      label: parts.join(' · '),
-      paddingLeft: true,
-      kind: InlayHintKind.Type,
-      tooltip: shown
-        .map((v) =>
-          v.origin === 'stated' && v.tool
-            ? `${v.name} = ${v.display} as stated; fatigue-notes would compute ${v.tool.display} (${v.tool.formula})`
-            : `${v.name}: ${v.meaning}`,
-        )
-        .join('\n'),
+    // One hint per value: an editor cuts a long hint at its own length limit (VS Code:
+    // `editor.inlayHints.maximumLength`, 43 characters), which would hide the later values.
+    const position = { line, character: view.line(line).length };
+    parts.forEach((part, i) => {
+      const v = shown[i];
+      out.push({
+        position,
+        label: i === 0 ? part : `· ${part}`,
+        paddingLeft: true,
+        kind: InlayHintKind.Type,
+        ...(v
+          ? {
+              tooltip:
+                v.origin === 'stated' && v.tool
+                  ? `${v.name} = ${v.display} as stated; fatigue-notes would compute ${v.tool.display} (${v.tool.formula})`
+                  : `${v.name}: ${v.meaning}`,
+            }
+          : {
+              tooltip: ranked
+                .slice(shown.length)
+                .map((x) => `${x.name} ${x.display}`)
+                .join('\n'),
+            }),
+      });
     });
   }
   for (const r of c.requirements) {

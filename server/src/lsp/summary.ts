@@ -9,6 +9,8 @@ import {
   type CheckDiagram,
   type CheckResult,
   checkDiagrams,
+  type MethodFields,
+  methodModule,
   type NoteResult,
   shownNames,
 } from '@fatigue-notes/core';
@@ -16,11 +18,15 @@ import type { NoteView } from './locate';
 
 export const SUMMARY_REQUEST = 'fatigue/summary';
 
+/** Warnings of a check whose text the summary carries (the preview lists them). */
+const SHOWN_WARNINGS = 3;
+
 export interface SummaryParams {
   uri: string;
 }
 
-export interface CheckSummary {
+/** The data behind the diagrams and tables are the fields the check's method declares (`MethodModule.fields`). */
+export interface CheckSummary extends Partial<MethodFields> {
   id: string | null;
   title?: string;
   method: CheckResult['method'];
@@ -34,15 +40,10 @@ export interface CheckSummary {
   shown: ReturnType<typeof shownNames>;
   /** The check's diagrams as the core draws them, without an embedded style (the page supplies it). */
   diagrams: CheckDiagram[];
-  haigh?: CheckResult['haigh'];
-  sn?: CheckResult['sn'];
-  tables?: CheckResult['tables'];
-  crackCurve?: CheckResult['crackCurve'];
-  histogram?: CheckResult['histogram'];
   range: CheckResult['range'];
   headerRange: CheckResult['headerRange'];
   /** Counted (the editor shows the diagnostics themselves), with the first error's message. */
-  diagnostics: { errors: number; warnings: number; firstError?: string };
+  diagnostics: { errors: number; warnings: number; firstError?: string; firstWarnings?: string[] };
 }
 
 export interface NoteSummary {
@@ -93,13 +94,13 @@ export function summaryOfResult(
         },
       };
       if (errors[0]) s.diagnostics.firstError = errors[0].message;
+      // The warnings themselves, so that the preview states them beside a pass (a few; the rest in the editor).
+      const warned = c.diagnostics.filter((d) => d.severity === 'warning').slice(0, SHOWN_WARNINGS);
+      if (warned.length > 0) s.diagnostics.firstWarnings = warned.map((d) => d.message);
       if (c.title !== undefined) s.title = c.title;
       if (c.criterion !== undefined) s.criterion = c.criterion;
-      if (c.haigh) s.haigh = c.haigh;
-      if (c.sn) s.sn = c.sn;
-      if (c.tables) s.tables = c.tables;
-      if (c.crackCurve) s.crackCurve = c.crackCurve;
-      if (c.histogram) s.histogram = c.histogram;
+      for (const f of methodModule(c.method)?.fields ?? [])
+        if (c[f] !== undefined) (s as unknown as Record<string, unknown>)[f] = c[f];
       return s;
     }),
   };

@@ -13,7 +13,7 @@ export function assumedFamily(ctx: CheckContext): void {
   const v = ctx.values;
   const acts = (n: string) => v[n] !== undefined && v[n].origin === 'computed' && !v[n].unused;
   const decided: string[] = [];
-  const fatigue = ['n_f', 'N_f', 'S_f', 'D'].some((n) => v[n] !== undefined);
+  const fatigue = ['n_f', 'N_f', 'S_f', 'D_sum'].some((n) => v[n] !== undefined);
   if (fatigue && !ctx.has('Se'))
     decided.push(
       acts('Se_prime')

@@ -66,6 +66,24 @@ const STRENGTH_TOP =
 const SIZE_GROUND =
   'the largest forged shafts are one to two metres across (from memory); common practice, no source';
 
+/** An elastic stress concentration is at least 1: a notch never lowers the peak stress. */
+function KT_LIMIT(name: string): Limit {
+  return {
+    errorBelow: 1,
+    below: `is below 1: ${name} is the peak stress over the nominal one, at least 1 for any notch (Peterson's Stress Concentration Factors, definition)`,
+    beyond: '',
+  };
+}
+
+/** Kf = 1 + q (Kt - 1) with Kt >= 1 and 0 <= q <= 1 is at least 1. */
+function KF_LIMIT(name: string, kt: string, q: string): Limit {
+  return {
+    errorBelow: 1,
+    below: `is below 1: ${name} = 1 + ${q} (${kt} - 1) with ${kt} >= 1 and ${q} between 0 and 1 is at least 1 (Shigley's MED Eq. 6-32); a smaller value would credit the notch with strength`,
+    beyond: '',
+  };
+}
+
 const LIMITS: Record<string, Limit> = {
   Sut: {
     errorAbove: 3.5e9,
@@ -145,6 +163,8 @@ const LIMITS: Record<string, Limit> = {
   },
   temp: {
     errorAbove: 1700 + 273.15,
+    errorBelow: 0,
+    below: 'is below absolute zero (-273.15 degC)',
     beyond: 'is above the melting point of every structural metal (1700 degC and above)',
   },
   f: {
@@ -160,6 +180,44 @@ const LIMITS: Record<string, Limit> = {
     errorAbove: 1,
     beyond: "cannot exceed 1: qs = (Kfs - 1)/(Kts - 1) lies between 0 and 1 (Shigley's MED Eq. 6-31)",
   },
+  ka: {
+    errorAbove: 1,
+    beyond:
+      "cannot exceed 1: the surface factor is the part's endurance against a polished specimen's (Shigley's MED Eq. 6-19, Table 6-2; the ground fit is capped at 1)",
+  },
+  kb: {
+    errorAbove: 1.12,
+    beyond:
+      "cannot exceed 1.11: the size factor's largest value is Shigley's Eq. 6-20 at the smallest diameter it covers (1.24 x 2.79^-0.107 = 1.11)",
+  },
+  kc: {
+    errorAbove: 1,
+    beyond:
+      "cannot exceed 1: the load factor is 1 in bending, 0.85 axial, 0.59 torsion (Shigley's MED Eq. 6-26)",
+  },
+  kd: {
+    errorAbove: 1.03,
+    beyond:
+      "cannot exceed 1.03: the temperature factor's largest value is Shigley's Eq. 6-27 near 260 degF (1.025); a stated kd above it claims strength no table gives",
+  },
+  ke: {
+    errorAbove: 1,
+    beyond:
+      "cannot exceed 1: the reliability factor is 1 at 50 % reliability and falls above it (Shigley's MED Table 6-5)",
+  },
+  kmisc: {
+    errorAbove: 2,
+    warnAbove: 1,
+    beyond: 'is no miscellaneous factor: more than doubling the endurance limit (common practice, no source)',
+    unusual:
+      'claims a benefit (shot peening, rolling, compressive residual stress): back it with fatigue tests of the treated part (common practice, no source)',
+  },
+  Kt: KT_LIMIT('Kt'),
+  Kts: KT_LIMIT('Kts'),
+  Kt_ax: KT_LIMIT('Kt_ax'),
+  Kf: KF_LIMIT('Kf', 'Kt', 'q'),
+  Kfs: KF_LIMIT('Kfs', 'Kts', 'qs'),
+  Kf_ax: KF_LIMIT('Kf_ax', 'Kt_ax', 'q'),
   N_ref: {
     errorBelow: 1e4,
     warnBelow: 1e6,

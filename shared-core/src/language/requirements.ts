@@ -6,6 +6,7 @@
 import type { CheckContext } from '../context/checkContext';
 import type { RequirementResult } from '../context/types';
 import { INPUT_NAMES, nearest, RESULT_NAMES } from '../context/vocabulary';
+import { renamedResult } from '../methods/registry';
 import { classify, sameVector, vectorOf } from '../units/dimensions';
 import { ExpressionError, evaluateExpression, type Scope } from './expressions';
 import type { RequireStatement } from './statements';
@@ -15,6 +16,7 @@ export function evaluateRequirements(
   statements: RequireStatement[],
   scope: Scope,
   withheld = false,
+  method?: string,
 ): RequirementResult[] {
   const out: RequirementResult[] = [];
   for (const s of statements) {
@@ -32,7 +34,33 @@ export function evaluateRequirements(
       };
       out.push(res);
       if (withheld) continue;
-      const v = ctx.values[symbol];
+      let v = ctx.values[symbol];
+      const renamed = !v && method ? renamedResult(method, symbol) : undefined;
+      if (renamed) {
+        ctx.diag(
+          'hint',
+          'renamed-result',
+          `\`${symbol}\` is now called \`${renamed}\` in a \`method: ${method}\` check; the old name still works`,
+          item.symbol.range,
+          [
+            {
+              title: `Change to \`${renamed}\``,
+              edits: [{ range: item.symbol.range, newText: renamed }],
+              preferred: true,
+            },
+          ],
+        );
+        v = ctx.values[renamed];
+        if (!v) {
+          ctx.diag(
+            'error',
+            'requirement-not-evaluated',
+            `\`${renamed}\` was not computed for this check (see its other diagnostics), so the requirement cannot be judged`,
+            item.symbol.range,
+          );
+          continue;
+        }
+      }
       if (!v && (symbol in RESULT_NAMES || symbol in INPUT_NAMES)) {
         ctx.diag(
           'error',
@@ -60,11 +88,24 @@ export function evaluateRequirements(
         const q = evaluateExpression(item.expr.text, scope);
         const want = vectorOf(v.dim);
         if (want && !sameVector(q.dim, want)) {
+          // `require: D <= 0.3` in a damage check that states the diameter D: the old name of the damage sum.
+          const newer = method && !renamed ? renamedResult(method, symbol) : undefined;
+          const hint =
+            newer && ctx.values[newer] ? `; the result once called \`${symbol}\` is now \`${newer}\`` : '';
           ctx.diag(
             'error',
             'wrong-dimension',
-            `\`${symbol}\` is ${ctx.dimLabel(v.dim)}; \`${item.expr.text}\` is ${ctx.dimLabel(classify(q.dim))}`,
+            `\`${symbol}\` is ${ctx.dimLabel(v.dim)}; \`${item.expr.text}\` is ${ctx.dimLabel(classify(q.dim))}${hint}`,
             item.expr.range,
+            hint && newer
+              ? [
+                  {
+                    title: `Change to \`${newer}\``,
+                    edits: [{ range: item.symbol.range, newText: newer }],
+                    preferred: true,
+                  },
+                ]
+              : [],
           );
           continue;
         }

@@ -10,7 +10,25 @@
 
 import type { BadStatement, RequireItem, Span, SpectrumStatement, Statement } from '../context/statements';
 import { lineRange, type Range } from '../context/types';
+import { nameInfo } from '../context/vocabulary';
 import type { SourceLine } from './markdownBlocks';
+
+/** A value of the right kind for a name, for the message of an empty assignment. */
+const EXAMPLE_BY_DIM: Record<string, string> = {
+  length: '35 mm',
+  stress: '300 MPa',
+  moment: '250 N*m',
+  force: '5 kN',
+  pressure: '2 MPa',
+  temperature: '20 degC',
+  toughness: '50 MPa*m^0.5',
+};
+
+function exampleValue(name: string): string {
+  if (name === 'reliability') return '0.99';
+  const dim = nameInfo(name)?.dim;
+  return (dim && EXAMPLE_BY_DIM[dim]) ?? (dim === 'one' ? '1.2' : '35 mm');
+}
 
 export type {
   AssignStatement,
@@ -140,7 +158,7 @@ export function parseLine(line: number, text: string, base = 0): Statement | nul
         kind: 'bad',
         line,
         code: 'missing-value',
-        message: `nothing after \`${name.text} =\`: write a value, e.g. \`${name.text} = 35 mm\``,
+        message: `nothing after \`${name.text} =\`: write a value, e.g. \`${name.text} = ${exampleValue(name.text)}\``,
         range: whole,
       };
     return { kind: 'assign', line, name, expr, whole };

@@ -16,6 +16,18 @@ import { historyBudget } from '../language/historyBudget';
 import { type BlockSource, ID_PATTERN } from '../language/markdownBlocks';
 
 /** A block as the session keeps it between updates (its lines are read again when needed). */
+/**
+ * Warnings that say a result may be unconservative: the `lints` setting cannot turn them off
+ * (nor any error); a reader of the note must see them.
+ */
+const KEPT_WARNINGS = new Set([
+  'hidden-finite-life',
+  'large-shell-opening',
+  'rotating-history',
+  'criterion-domain',
+  'word-of-other-method',
+]);
+
 export type BlockHead = Omit<BlockSource, 'lines'>;
 
 export class BlockSequence {
@@ -50,7 +62,10 @@ export class BlockSequence {
       if (block.fallback) entry.result.diagnostics.unshift(fallbackNotice(block));
     }
     const lints = this.options.lints;
-    if (lints) entry.result.diagnostics = entry.result.diagnostics.filter((d) => lints[d.code] !== false);
+    if (lints)
+      entry.result.diagnostics = entry.result.diagnostics.filter(
+        (d) => d.severity === 'error' || KEPT_WARNINGS.has(d.code) || lints[d.code] !== false,
+      );
     return entry;
   }
 

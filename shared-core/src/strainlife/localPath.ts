@@ -419,15 +419,33 @@ export function traceSpectrum(levels: readonly SpectrumLevel[], options: PathOpt
   );
   const first = tracer.pointFrom(undefined, peak);
   const topPoint = peak === top ? first : tracer.pointFrom(first, top);
-  for (const lv of usable) {
-    // Down the envelope's descending branch to the level's minimum, up to its maximum: the loop.
-    const a = tracer.pointFrom(topPoint, lv.S_min);
-    const b = tracer.pointFrom(a, lv.S_max);
-    tracer.addLoop(a, b, lv.count);
+  // One block is the levels in order, each a cycle max -> min, repeated: its rainflow with the
+  // memory rules (started at the largest absolute peak) gives the cycles that join levels,
+  // the envelope top -> bottom among them when no single level spans it. Each level's other
+  // n - 1 cycles are its own loops. Every loop hangs from the envelope's descending branch: the
+  // highest local stresses any branch inside the envelope reaches (Masing and memory), so the
+  // local means are never understated.
+  const sequence = new Tracer(options.curve, options.rule, options.K, 0);
+  for (const S of reorderedBlock(usable.flatMap((lv) => [lv.S_max, lv.S_min]))) sequence.push(S);
+  const hang = (lo: number, hi: number, count: number) => {
+    const a = tracer.pointFrom(topPoint, lo);
+    const b = tracer.pointFrom(a, hi);
+    tracer.addLoop(a, b, count);
     // For drawing: the loop closes at its minimum, and the path returns to the envelope's top.
-    const closed = tracer.pointFrom(b, lv.S_min);
+    const closed = tracer.pointFrom(b, lo);
     tracer.pointFrom(closed, top);
-  }
+  };
+  // Equal cycles counted together, the largest range first.
+  const cycles = new Map<string, { lo: number; hi: number; count: number }>();
+  const add = (lo: number, hi: number, count: number) => {
+    const key = `${lo}|${hi}`;
+    const c = cycles.get(key);
+    if (c) c.count += count;
+    else cycles.set(key, { lo, hi, count });
+  };
+  for (const l of sequence.loops) add(l.S_min, l.S_max, 1);
+  for (const lv of usable) if (lv.count > 1) add(lv.S_min, lv.S_max, lv.count - 1);
+  for (const c of [...cycles.values()].sort((x, y) => y.hi - y.lo - (x.hi - x.lo))) hang(c.lo, c.hi, c.count);
   return {
     points: tracer.points,
     loops: tracer.loops,

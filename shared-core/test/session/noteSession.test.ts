@@ -332,3 +332,40 @@ describe('NoteSession and evaluateNote share one loop over blocks', () => {
     expect(s.lastUpdate()).toMatchObject({ kind: 'block', evaluated: 2 });
   });
 });
+
+describe('lints that cannot be turned off', () => {
+  const note = (extra: string[]) =>
+    [
+      '```fatigue c',
+      'Sut = 600 MPa',
+      'Sy = 450 MPa',
+      'material-family: steel',
+      'surface: machined',
+      'temp = 20 degC',
+      'reliability = 0.9',
+      'd = 30 mm',
+      'feature: none',
+      'M_a = 700 N*m',
+      ...extra,
+      'require: n_y >= 1',
+      '```',
+      '',
+    ].join('\n');
+  const offAll = (text: string) =>
+    Object.fromEntries(evaluateNote(text).checks[0].diagnostics.map((d) => [d.code, false]));
+
+  it('a pass that hides a finite life keeps its warning whatever the lints say', () => {
+    const text = note([]);
+    const codes = evaluateNote(text).checks[0].diagnostics.map((d) => d.code);
+    expect(codes).toContain('hidden-finite-life');
+    const kept = evaluateNote(text, { lints: offAll(text) }).checks[0].diagnostics.map((d) => d.code);
+    expect(kept).toEqual(['hidden-finite-life']);
+  });
+
+  it('an error stays whatever the lints say', () => {
+    const text = note(['kb =']);
+    const kept = evaluateNote(text, { lints: offAll(text) }).checks[0].diagnostics;
+    expect(kept.some((d) => d.code === 'missing-value')).toBe(true);
+    for (const d of kept) expect(d.severity === 'error' || d.code === 'hidden-finite-life').toBe(true);
+  });
+});
