@@ -142,6 +142,43 @@ export interface MethodFields {
   crackCurve?: Array<[number, number]>;
   /** Rainflow range-mean histogram, for a damage check with a history. */
   histogram?: { rangeEdges: number[]; meanEdges: number[]; counts: number[][]; unit: string };
+  /** Notch-root hysteresis path and strain-life curve, for a strain-life check. */
+  strainLife?: StrainLifeData;
+}
+
+/**
+ * What the strain-life diagrams draw, computed by the method (stresses in Pa, strains as
+ * numbers, lives in reversals 2N).
+ */
+export interface StrainLifeData {
+  rule: 'neuber' | 'glinka';
+  model: 'none' | 'morrow-elastic' | 'morrow-full' | 'swt';
+  factor: 'Kt' | 'Kf';
+  /** The local path along its branches (cyclic curve from zero, Masing branches), [sigma, eps]. */
+  path: Array<[number, number]>;
+  /** The path's reversal and closure points, in order: nominal S, local sigma and eps. */
+  points: Array<{ S: number; sigma: number; eps: number }>;
+  /** True when only the first points of the path are kept (every loop is counted nonetheless). */
+  truncated: boolean;
+  /** Closed loops of one pass (at most 64 listed); `reversals` null where the loop does no damage. */
+  loops: Array<{
+    sigma_max: number;
+    sigma_min: number;
+    eps_max: number;
+    eps_min: number;
+    count: number;
+    reversals: number | null;
+    governing: boolean;
+  }>;
+  /** The governing loop closed along its two Masing branches, [sigma, eps]. */
+  governingLoop: Array<[number, number]>;
+  /** Strain-life curve without mean stress: [2N, total, elastic, plastic strain amplitude], 1 to 1e8 reversals. */
+  curve: Array<[number, number, number, number]>;
+  /** Transition life 2N_t (reversals) and the strain amplitude there. */
+  transition: number;
+  eps_a_at_transition: number;
+  /** The governing loop on the curve: its strain amplitude and life (null: beyond the curve). */
+  operating: { eps_a: number; reversals: number | null; sigma_m: number } | null;
 }
 
 export interface CheckResult extends MethodFields {

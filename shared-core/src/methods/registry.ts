@@ -10,12 +10,13 @@ import { declareMethodWord, declareMethodWords } from '../context/vocabulary';
 import type { DiagramOptions } from '../diagrams/frame';
 import { crackGrowth } from './crack-growth';
 import { damage } from './damage';
+import { strainLife } from './strain-life';
 import { stressLife } from './stress-life';
 import { TEMPLATE_UNITS } from './templateParts';
 import type { DiagramSource, MethodHeadline, MethodModule, MethodTemplate } from './types';
 
 /** The methods, the default (no `method:` stated) first. */
-const METHODS: MethodModule[] = [stressLife, damage, crackGrowth];
+const METHODS: MethodModule[] = [stressLife, damage, crackGrowth, strainLife];
 
 const withdraw = new Map<string, () => void>();
 function declare(m: MethodModule): void {
