@@ -543,7 +543,7 @@ describe('diagnostics on the right lines', () => {
     );
     const { c, text } = evaluate(lines);
     const d = diag(c, 'strain-life-constants-invalid');
-    expect(d.range.start.line).toBe(lineOf(text, 'sigma_f_prime'));
+    expect(d.range.start.line).toBe(lineOf(text, 'c_coffin'));
     expectAllFinite(c);
     expect(c.values.N_f).toBeUndefined();
   });
@@ -666,4 +666,42 @@ describe("Dowling, Mechanical Behavior of Materials, 4th ed., Example 14.3's pro
       // The root yields on the first loading: the local peak lies below Kt S_max.
       expect(smax).toBeLessThan(2.8 * 750e6);
     });
+});
+
+describe('strain-life: points of an independent hand check from the docs', () => {
+  const curveLines = ['method: strain-life', 'E = 202 GPa', 'K_prime = 1258 MPa', 'n_prime = 0.208'];
+  const loads = ['Kt = 2.5', 'r = 2 mm', 'sigma_max = 200 MPa', 'sigma_min = -200 MPa'];
+
+  it('a constant that cannot be a strain-life curve is reported on its own line, and 2N_t is withheld', () => {
+    const { c, text } = evaluate([
+      ...curveLines,
+      'sigma_f_prime = 948 MPa',
+      'b_basquin = -0.092',
+      'eps_f_prime = 0.26',
+      'c_coffin = -0.05',
+      ...loads,
+    ]);
+    // c must be steeper than b (Coffin-Manson: the plastic line falls faster; Dowling Ch. 14).
+    expect(diag(c, 'strain-life-constants-invalid').range.start.line).toBe(lineOf(text, 'c_coffin'));
+    expect(c.values.two_N_t).toBeUndefined();
+    expect(c.values.N_f).toBeUndefined();
+  });
+
+  it('estimate: hardness works from HB and E alone; Sut is not needed when HB is stated', () => {
+    const est = (extra: string[]) =>
+      evaluate([
+        'method: strain-life',
+        'material-family: steel',
+        'estimate: hardness',
+        'E = 206 GPa',
+        'HB = 200',
+        ...extra,
+        ...loads,
+      ]).c;
+    const alone = est([]);
+    expect(alone.diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
+    // Roessle & Fatemi's hardness method reads HB; a stated Sut beside it changes nothing.
+    const withSut = est(['Sut = 700 MPa']);
+    expect(alone.values.N_f.si).toBe(withSut.values.N_f.si);
+  });
 });

@@ -84,6 +84,17 @@ const CURVE_CODES = new Set(['cyclic-constants-invalid', 'cyclic-constants-range
 const CONSTANT_CODES = new Set(['strain-life-constants-invalid', 'strain-life-constants-range']);
 const MODEL_CODES = new Set(['swt-no-tension', 'mean-stress-ignored', 'compressive-mean']);
 const HISTORY_CODES = new Set(['history-non-finite', 'history-too-few-points', 'history-no-cycles']);
+/** How the core's messages name each constant, in the order they name them. */
+const NAMED_CONSTANTS: ReadonlyArray<[RegExp, string]> = [
+  [/^(c must|c = )/, 'c_coffin'],
+  [/^(b must|b = )/, 'b_basquin'],
+  [/^sigma_f'/, 'sigma_f_prime'],
+  [/^eps_f'/, 'eps_f_prime'],
+  [/^K'/, 'K_prime'],
+  [/^n'/, 'n_prime'],
+  [/^E must/, 'E'],
+];
+
 /** Reported by this file itself (on the Kt/Kf line, with what the check states). */
 const OWN_CODES = new Set(['notch-factor']);
 
@@ -227,7 +238,8 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
       return null;
     }
     const range = estimateStmt!.whole;
-    if (Sut === undefined) {
+    // The hardness method works from HB alone (Sut only converts to HB when HB is missing).
+    if (Sut === undefined && !(estimateWord === 'hardness' && ctx.has('HB'))) {
       if (rejected(ctx, 'Sut')) return null;
       ctx.diag(
         'error',
@@ -273,7 +285,12 @@ function readMaterial(ctx: CheckContext): MaterialRead | null {
       HB: ctx.input('HB'),
       materialClass: ec,
     });
-    const estInputs = ['Sut', 'E', ...(ctx.has('RA') ? ['RA'] : []), ...(ctx.has('HB') ? ['HB'] : [])];
+    const estInputs = [
+      ...(Sut !== undefined ? ['Sut'] : []),
+      'E',
+      ...(ctx.has('RA') ? ['RA'] : []),
+      ...(ctx.has('HB') ? ['HB'] : []),
+    ];
     let failed = false;
     for (const note of est.notes) {
       const sev = note.severity ?? 'warning';
@@ -682,6 +699,11 @@ function noteRange(
   notch: NotchRead,
 ): Range {
   if (code === 'invalid-input' && /concentration factor/.test(message)) return notch.range;
+  // The constant the message names first, where the note states it (`c must be steeper than b` -> c_coffin).
+  if (CURVE_CODES.has(code) || CONSTANT_CODES.has(code)) {
+    const named = NAMED_CONSTANTS.find(([re, n]) => re.test(message) && ctx.has(n));
+    if (named) return ctx.rangeOf(named[1]);
+  }
   if (CURVE_CODES.has(code))
     return ctx.has('K_prime')
       ? ctx.rangeOf('K_prime')
@@ -867,9 +889,14 @@ export function runStrainLife(ctx: CheckContext): MethodExtras {
   const { errors, info } = reportNotes(ctx, res.notes, loading, notch);
   // The transition life is the material's: shown even when the loading withholds the rest.
   const constIn = ['E', ...CONSTANTS];
-  ctx.result('two_N_t', bare(res.transition), constIn, {
-    range: ctx.optionRange('material') ?? ctx.rangeOf('c_coffin'),
-  });
+  // ... unless the constants themselves cannot be a strain-life curve (c not steeper than b ...).
+  const constantsBad = res.notes.some(
+    (n) => n.severity === 'error' && (CONSTANT_CODES.has(n.code) || CURVE_CODES.has(n.code)),
+  );
+  if (!constantsBad)
+    ctx.result('two_N_t', bare(res.transition), constIn, {
+      range: ctx.optionRange('material') ?? ctx.rangeOf('c_coffin'),
+    });
   if (errors) return {};
   if (res.governing < 0) {
     // A static load (no range): no loop, no fatigue damage; the life is unbounded.
