@@ -212,7 +212,7 @@ export function runWeld(ctx: CheckContext): MethodExtras {
     const maxRange = stressed.maxRange;
     ctx.result(
       'u_yield',
-      stressRangeLimit(standard, maxRange, Sy, 'normal', usedType === 'effective-notch' ? 'notch' : usedType),
+      stressRangeLimit(standard, maxRange, Sy, 'normal', usedType),
       [stressed.name, 'Sy'],
       { range: stressed.where, meaning: 'largest stress range over the standard limit relative to yield' },
     );
