@@ -142,6 +142,25 @@ export interface MethodFields {
   crackCurve?: Array<[number, number]>;
   /** Rainflow range-mean histogram, for a damage check with a history. */
   histogram?: { rangeEdges: number[]; meanEdges: number[]; counts: number[][]; unit: string };
+  /** S-N curves of a weld check (design curve and its operating ranges), for its diagram. */
+  weldSn?: WeldSnData[];
+}
+
+/** The design curve of a welded detail and the ranges on it (Pa, cycles), for its S-N diagram. */
+export interface WeldSnData {
+  label: string;
+  stress: 'normal' | 'shear';
+  /** Design curve: the class over gamma_Mf. */
+  deltaC: number;
+  m1: number;
+  ND: number;
+  deltaD: number;
+  /** Slope beyond the knee for this loading; null: no damage below the knee. */
+  m2: number | null;
+  NL: number | null;
+  deltaL: number | null;
+  /** Operating ranges times gamma_Ff, with their cycles and lives (null: no damage). */
+  points: Array<{ label: string; range: number; count: number; N: number | null }>;
 }
 
 export interface CheckResult extends MethodFields {

@@ -13,9 +13,10 @@ import { damage } from './damage';
 import { stressLife } from './stress-life';
 import { TEMPLATE_UNITS } from './templateParts';
 import type { DiagramSource, MethodHeadline, MethodModule, MethodTemplate } from './types';
+import { weld } from './weld';
 
 /** The methods, the default (no `method:` stated) first. */
-const METHODS: MethodModule[] = [stressLife, damage, crackGrowth];
+const METHODS: MethodModule[] = [stressLife, damage, crackGrowth, weld];
 
 const withdraw = new Map<string, () => void>();
 function declare(m: MethodModule): void {

@@ -15,17 +15,17 @@
  *    equivalent range at 2e6 cycles, the utilisation, the safety factor on stress range, the life.
  */
 import { type Computed, computed, MM, MPA } from '../../computed';
-import type { CheckContext } from '../../language/checkContext';
-import { ExpressionError, evaluateExpression } from '../../language/expressions';
-import type { SpectrumStatement } from '../../language/statements';
-import type { Range } from '../../language/types';
+import type { CheckContext } from '../../context/checkContext';
+import { ExpressionError, type Quantity } from '../../context/quantity';
+import type { SpectrumStatement } from '../../context/statements';
+import type { Range, WeldSnData } from '../../context/types';
 import { HistoryCsvReader, RAINFLOW_SOURCE, RainflowCounter } from '../../rainflow';
 import { sameVector, vectorOf } from '../../units/dimensions';
 import {
+  blocksToLimit,
   catalogueClass,
   constantAmplitudeSafetyFactor,
   cyclesToLimit,
-  blocksToLimit,
   enCurve,
   enEffectiveRange,
   enInteraction,
@@ -35,20 +35,20 @@ import {
   type HotSpotScheme,
   hotSpotClass,
   hotSpotStress,
+  type IiwThicknessJoint,
+  type ImprovementMethod,
   iiwCurve,
   iiwInteraction,
   iiwStressRatioFactor,
   iiwThicknessFactor,
-  type IiwThicknessJoint,
   improvedClass,
-  type ImprovementMethod,
   loadFactor,
   notchStressClass,
   permissibleDamage,
   type RangeCount,
+  type ResidualCondition,
   rangeSafetyFactor,
   rangeUtilisation,
-  type ResidualCondition,
   resistanceFactor,
   statedThicknessFactorNotes,
   stressRangeLimit,
@@ -59,32 +59,11 @@ import {
   type WeldMaterial,
   type WeldSnCurve,
   type WeldStandard,
-  type WeldStress,
   type WeldStressType,
 } from '../../weld';
 import type { MethodExtras } from '../types';
 
-/** The curve data a weld check keeps for its S-N diagram (Pa, cycles). */
-export interface WeldSnData {
-  label: string;
-  stress: WeldStress;
-  /** Design curve: the class over gamma_Mf. */
-  deltaC: number;
-  m1: number;
-  ND: number;
-  deltaD: number;
-  m2: number | null;
-  NL: number | null;
-  deltaL: number | null;
-  /** Operating ranges times gamma_Ff, with their cycles and lives (null: no damage). */
-  points: Array<{ label: string; range: number; count: number; N: number | null }>;
-}
-
-declare module '../../language/types' {
-  interface MethodFields {
-    weldSn?: WeldSnData[];
-  }
-}
+export type { WeldSnData };
 
 const STANDARDS: Record<string, { standard: WeldStandard; edition?: '2008' | '2016' }> = {
   'en-1993-1-9': { standard: 'EN 1993-1-9' },
@@ -99,6 +78,9 @@ const NOT_FOR_WELDS: Record<string, string> = {
   surface:
     'the surface factor of the Marin chain does not apply to a weld: the weld profile and its surface are part of the detail class',
 };
+/** Dimension vector of a force per length (N/m = kg s^-2). */
+const FORCE_PER_LENGTH = [1, 0, -2, 0, 0, 0, 0, 0, 0];
+
 const MARIN = ['ka', 'kb', 'kc', 'kd', 'ke', 'kmisc', 'Se', 'Se_prime', 'Kt', 'Kf', 'q', 'Sut'];
 
 type Loading =
@@ -118,10 +100,6 @@ function note(ctx: CheckContext): void {
         `\`${n}\` is not used: Marin factors, notch factors and the endurance limit of a plain specimen do not apply to a welded detail; its geometry, residual stress and weld profile are in the detail class (state \`delta_sigma_C\` or \`detail:\`)`,
         ctx.rangeOf(n),
       );
-}
-
-function stressInput(ctx: CheckContext, name: string): number | undefined {
-  return ctx.input(name);
 }
 
 export function runWeld(ctx: CheckContext): MethodExtras {
@@ -210,12 +188,21 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   const Sy = ctx.input('Sy');
   if (Sy !== undefined) {
     const maxRange = stressed.maxRange;
-    ctx.result(
-      'u_yield',
-      stressRangeLimit(standard, maxRange, Sy, 'normal', usedType),
-      [stressed.name, 'Sy'],
-      { range: stressed.where, meaning: 'largest stress range over the standard limit relative to yield' },
-    );
+    const lim = stressRangeLimit(standard, maxRange, Sy, 'normal', usedType);
+    ctx.result('u_yield', lim, [stressed.name, 'Sy'], {
+      range: stressed.where,
+      meaning: 'largest stress range over the standard limit relative to yield',
+    });
+    // Beyond the limit the detail yields every cycle: no S-N result is physical.
+    if (lim.notes?.some((n) => n.severity === 'error')) return {};
+    if (tau && usedType !== 'notch') {
+      const limTau = stressRangeLimit(standard, tau.range, Sy, 'shear');
+      ctx.result('u_yield_tau', limTau, ['delta_tau', 'Sy'], {
+        range: tau.where,
+        meaning: 'shear range over the limit 1.5 fy / sqrt(3)',
+      });
+      if (limTau.notes?.some((n) => n.severity === 'error')) return {};
+    }
   } else
     ctx.diag(
       'warning',
@@ -226,14 +213,22 @@ export function runWeld(ctx: CheckContext): MethodExtras {
 
   // 4. Damage, equivalent range, verification.
   const proportional = ctx.option('normal-shear') !== 'non-proportional';
+  // Constant amplitude reads the life on the curve itself (D = 1); the permissible damage sum
+  // of the standard belongs to variable amplitude (or is stated).
   const Dallow = ctx.result(
     'D_allow',
-    permissibleDamage(standard, {
-      proportional,
-      ...(ctx.has('D_allow') ? { stated: ctx.input('D_allow') } : {}),
-    }),
+    loading.kind === 'constant' && !ctx.has('D_allow')
+      ? computed(
+          1,
+          'D_allow = 1 (constant amplitude: the life is read on the S-N curve itself)',
+          curve.source,
+        )
+      : permissibleDamage(standard, {
+          proportional,
+          ...(ctx.has('D_allow') ? { stated: ctx.input('D_allow') } : {}),
+        }),
     [],
-    { meaning: 'permissible damage sum' },
+    { range: ctx.rangeOf('D_allow'), meaning: 'permissible damage sum' },
   );
   const cycles: RangeCount[] =
     loading.kind === 'constant'
@@ -251,13 +246,14 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   const total = cycles.reduce((s, c) => s + c.count, 0);
   const loadWhere = loading.kind === 'spectrum' ? loading.levels[0].stmt.whole : loading.range;
   const dInputs = ['delta_sigma_C_eff', 'gamma_Ff', 'gamma_Mf', stressed.name];
-  const D = ctx.result('D_sum', dmg, dInputs, {
-    range: loadWhere,
-    meaning:
-      loading.kind === 'constant'
-        ? 'Miner damage of the required cycles N on the design curve'
-        : 'Miner damage of one pass of the spectrum or history on the design curve',
-  }) ?? 0;
+  const D =
+    ctx.result('D_sum', dmg, dInputs, {
+      range: loadWhere,
+      meaning:
+        loading.kind === 'constant'
+          ? 'Miner damage of the required cycles N on the design curve'
+          : 'Miner damage of one pass of the spectrum or history on the design curve',
+    }) ?? 0;
   ctx.result(
     'cycles_counted',
     computed(
@@ -287,8 +283,8 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   });
   const uSigma = ctx.result(
     'u_sigma',
-    rangeUtilisation(dE2 ?? 0, curve.deltaC, gammaFf, gammaMf),
-    ['delta_sigma_E2', 'delta_sigma_C_eff', 'gamma_Ff', 'gamma_Mf'],
+    allowedUtilisation(rangeUtilisation(dE2 ?? 0, curve.deltaC, gammaFf, gammaMf), Dallow ?? 1, curve.m1),
+    ['delta_sigma_E2', 'delta_sigma_C_eff', 'gamma_Ff', 'gamma_Mf', 'D_allow'],
     { range: loadWhere, meaning: 'utilisation of the normal-stress range verification at 2e6 cycles' },
   );
   // Shear and interaction (constant amplitude).
@@ -312,27 +308,29 @@ export function runWeld(ctx: CheckContext): MethodExtras {
         range: tau.where,
         meaning: 'equivalent constant-amplitude shear range at 2e6 cycles',
       });
-      uTau = ctx.result('u_tau', rangeUtilisation(dtE2 ?? 0, tcurve.deltaC, gammaFf, gammaMf), ['delta_tau_E2'], {
-        range: tau.where,
-        meaning: 'utilisation of the shear-range verification at 2e6 cycles',
-      });
-      if (Sy !== undefined)
-        ctx.result('u_yield_tau', stressRangeLimit(standard, tau.range, Sy, 'shear'), ['delta_tau', 'Sy'], {
+      uTau = ctx.result(
+        'u_tau',
+        allowedUtilisation(
+          rangeUtilisation(dtE2 ?? 0, tcurve.deltaC, gammaFf, gammaMf),
+          Dallow ?? 1,
+          tcurve.m1,
+        ),
+        ['delta_tau_E2', 'D_allow'],
+        {
           range: tau.where,
-          meaning: 'shear range over the limit 1.5 fy / sqrt(3)',
-        });
+          meaning: 'utilisation of the shear-range verification at 2e6 cycles',
+        },
+      );
     }
   }
   let u: Computed;
   if (uTau !== null && uSigma !== null)
-    u =
-      standard === 'EN 1993-1-9'
-        ? enInteraction(uSigma, uTau)
-        : iiwInteraction(uSigma, uTau, proportional);
+    u = standard === 'EN 1993-1-9' ? enInteraction(uSigma, uTau) : iiwInteraction(uSigma, uTau, proportional);
   else u = computed(uSigma ?? 0, 'u_fat = u_sigma', curve.source);
   ctx.result('u_fat', u, uTau !== null ? ['u_sigma', 'u_tau'] : ['u_sigma'], {
     range: loadWhere,
-    meaning: 'utilisation of the verification (normal range, or the normal-shear interaction); at most 1 passes',
+    meaning:
+      'utilisation of the verification (normal range, or the normal-shear interaction); at most 1 passes',
   });
   // Safety factor on stress range.
   const Dlim = Dallow ?? 1;
@@ -357,7 +355,7 @@ export function runWeld(ctx: CheckContext): MethodExtras {
     deltaL: curve.deltaL === null ? null : curve.deltaL / gammaMf,
     points: cyclesPoints(curve, cycles, gammaFf, gammaMf, loading.kind === 'constant'),
   };
-  return { weldSn: [design], tables: damageTable(ctx, curve, cycles, gammaFf, gammaMf, loading) };
+  return { weldSn: [design], tables: damageTable(ctx, curve, gammaFf, gammaMf, loading) };
 }
 
 function cyclesPoints(
@@ -367,7 +365,12 @@ function cyclesPoints(
   gammaMf: number,
   constant: boolean,
 ): WeldSnData['points'] {
-  const design = { ...curve, deltaC: curve.deltaC / gammaMf, deltaD: curve.deltaD / gammaMf, deltaL: curve.deltaL === null ? null : curve.deltaL / gammaMf };
+  const design = {
+    ...curve,
+    deltaC: curve.deltaC / gammaMf,
+    deltaD: curve.deltaD / gammaMf,
+    deltaL: curve.deltaL === null ? null : curve.deltaL / gammaMf,
+  };
   const sorted = [...cycles].sort((a, b) => b.range - a.range).slice(0, 40);
   return sorted.map((c) => {
     const s = c.range * gammaFf;
@@ -388,13 +391,17 @@ function lifeOf(c: WeldSnCurve, s: number, constant: boolean): number | null {
 function damageTable(
   ctx: CheckContext,
   curve: WeldSnCurve,
-  cycles: RangeCount[],
   gammaFf: number,
   gammaMf: number,
   loading: Loading,
 ): NonNullable<MethodExtras['tables']> {
   if (loading.kind !== 'spectrum') return [];
-  const design = { ...curve, deltaC: curve.deltaC / gammaMf, deltaD: curve.deltaD / gammaMf, deltaL: curve.deltaL === null ? null : curve.deltaL / gammaMf };
+  const design = {
+    ...curve,
+    deltaC: curve.deltaC / gammaMf,
+    deltaD: curve.deltaD / gammaMf,
+    deltaL: curve.deltaL === null ? null : curve.deltaL / gammaMf,
+  };
   const rows = loading.levels.map((l) => {
     const N = lifeOf(design, l.range * gammaFf, false);
     return [
@@ -408,7 +415,7 @@ function damageTable(
   return [
     {
       title: 'Damage per spectrum level (design curve)',
-      columns: ['line', 'range', 'n', 'N', 'damage'],
+      columns: ['line', 'range', 'n', 'N', 'n / N'],
       rows,
     },
   ];
@@ -416,7 +423,13 @@ function damageTable(
 
 function factor(ctx: CheckContext, name: string, c: Computed): number | null {
   const bad = c.notes?.some((n) => n.severity === 'error');
-  const v = ctx.result(name, c, [], { range: ctx.rangeOf(name), meaning: name === 'gamma_Ff' ? 'partial factor on the fatigue load (stress ranges)' : 'partial factor on the fatigue strength' });
+  const v = ctx.result(name, c, [], {
+    range: ctx.rangeOf(name),
+    meaning:
+      name === 'gamma_Ff'
+        ? 'partial factor on the fatigue load (stress ranges)'
+        : 'partial factor on the fatigue strength',
+  });
   return bad ? null : v;
 }
 
@@ -450,7 +463,9 @@ function readLoading(ctx: CheckContext): Loading | null {
   return readHistory(ctx, hist!.whole);
 }
 
-function readWeldSpectrum(ctx: CheckContext): Array<{ range: number; n: number; stmt: SpectrumStatement }> | null {
+function readWeldSpectrum(
+  ctx: CheckContext,
+): Array<{ range: number; n: number; stmt: SpectrumStatement }> | null {
   const out: Array<{ range: number; n: number; stmt: SpectrumStatement }> = [];
   let ok = true;
   for (const stmt of ctx.spectrum) {
@@ -467,9 +482,11 @@ function readWeldSpectrum(ctx: CheckContext): Array<{ range: number; n: number; 
         ok = false;
         continue;
       }
-      let q: ReturnType<typeof evaluateExpression>;
+      let q: Quantity;
       try {
-        q = evaluateExpression(item.expr.text, ctx.scope!);
+        if (!ctx.evaluate)
+          throw new ExpressionError('expression-error', 'expressions cannot be evaluated here');
+        q = ctx.evaluate(item.expr.text);
       } catch (e) {
         const err = e instanceof ExpressionError ? e : new ExpressionError('expression-error', String(e));
         ctx.diag('error', err.code, `${name}: ${err.message}`, item.expr.range);
@@ -481,7 +498,9 @@ function readWeldSpectrum(ctx: CheckContext): Array<{ range: number; n: number; 
         ctx.diag(
           'error',
           q.dim.every((x) => x === 0) ? 'missing-unit' : 'wrong-dimension',
-          name === 'n' ? '`n` is a number of cycles (a pure number)' : `\`${name}\` must be a stress (e.g. MPa)`,
+          name === 'n'
+            ? '`n` is a number of cycles (a pure number)'
+            : `\`${name}\` must be a stress (e.g. MPa)`,
           item.expr.range,
         );
         ok = false;
@@ -491,7 +510,12 @@ function readWeldSpectrum(ctx: CheckContext): Array<{ range: number; n: number; 
     }
     if (!ok) continue;
     if (!(got.n > 0)) {
-      ctx.diag('error', 'missing-cycles', 'this spectrum level needs a positive number of cycles `n = ...`', stmt.whole);
+      ctx.diag(
+        'error',
+        'missing-cycles',
+        'this spectrum level needs a positive number of cycles `n = ...`',
+        stmt.whole,
+      );
       ok = false;
       continue;
     }
@@ -612,14 +636,13 @@ function normalStress(
   loading: Loading,
 ): NormalStress | null {
   const type: WeldStressType =
-    ctx.has('dF_perp') || throatDetail
-      ? 'throat'
-      : stressType === 'effective-notch'
-        ? 'notch'
-        : stressType;
+    ctx.has('dF_perp') || throatDetail ? 'throat' : stressType === 'effective-notch' ? 'notch' : stressType;
   if (loading.kind !== 'constant') {
     const where = loading.kind === 'spectrum' ? loading.levels[0].stmt.whole : loading.range;
-    const ranges = loading.kind === 'spectrum' ? loading.levels : loading.cycles.map((c) => ({ range: c.range, n: c.count }));
+    const ranges =
+      loading.kind === 'spectrum'
+        ? loading.levels
+        : loading.cycles.map((c) => ({ range: c.range, n: c.count }));
     const max = ranges.reduce((m, l) => Math.max(m, l.range), 0);
     for (const n of ['delta_sigma', 'sigma_max', 'sigma_min', 'sigma_x1', 'dF_perp'])
       if (ctx.has(n))
@@ -631,9 +654,17 @@ function normalStress(
         );
     ctx.result(
       'delta_sigma_max',
-      computed(max, 'delta_sigma_max = largest range of the levels or counted cycles', loading.kind === 'history' ? RAINFLOW_SOURCE : 'the spectrum of the note'),
+      computed(
+        max,
+        'delta_sigma_max = largest range of the levels or counted cycles',
+        loading.kind === 'history' ? RAINFLOW_SOURCE : 'the spectrum of the note',
+      ),
       [],
-      { dim: 'stress', range: where, meaning: `largest ${typeWords(type)} stress range of the spectrum or history` },
+      {
+        dim: 'stress',
+        range: where,
+        meaning: `largest ${typeWords(type)} stress range of the spectrum or history`,
+      },
     );
     return {
       type,
@@ -655,7 +686,29 @@ function normalStress(
       );
       if (!ctx.has('delta_sigma')) return null;
     } else {
-      const nw = ctx.input('n_w') ?? 2;
+      const fDim = ctx.stated.get('dF_perp')?.q.dim;
+      if (!fDim || !sameVector(fDim, FORCE_PER_LENGTH)) {
+        ctx.diag(
+          'error',
+          'wrong-dimension',
+          '`dF_perp` is a force per length of weld (e.g. `dF_perp = 450 N/mm`)',
+          ctx.rangeOf('dF_perp'),
+        );
+        return null;
+      }
+      let nw = ctx.input('n_w');
+      if (nw === undefined) {
+        // One throat carrying the whole force is the safe side: a double fillet weld halves it
+        // only when the note says the two welds share it.
+        nw = 1;
+        ctx.diag(
+          'warning',
+          'defaulted-throats',
+          'no `n_w` stated: the force range `dF_perp` is taken on one throat (n_w = 1, on the safe side); state `n_w = 2` where two fillet welds share it',
+          ctx.rangeOf('dF_perp'),
+          [ctx.insertFix('State `n_w = 1` (one throat carries the force)', 'n_w = 1')],
+        );
+      }
       const c = throatNormalRange({ deltaFPerp: F, a, welds: nw });
       if (c.notes?.some((n) => n.severity === 'error')) {
         ctx.result('delta_sigma', c, ['dF_perp', 'a_w'], { dim: 'stress', range: ctx.rangeOf('dF_perp') });
@@ -671,7 +724,9 @@ function normalStress(
   }
   if (type === 'hot-spot' && ctx.has('sigma_x1')) {
     const scheme = (ctx.option('hot-spot-scheme') ?? 'a-linear') as HotSpotScheme;
-    const names = scheme.endsWith('quadratic') ? ['sigma_x1', 'sigma_x2', 'sigma_x3'] : ['sigma_x1', 'sigma_x2'];
+    const names = scheme.endsWith('quadratic')
+      ? ['sigma_x1', 'sigma_x2', 'sigma_x3']
+      : ['sigma_x1', 'sigma_x2'];
     const vals = names.map((n) => ctx.input(n));
     if (vals.some((v) => v === undefined)) {
       ctx.diag(
@@ -691,7 +746,12 @@ function normalStress(
       );
     const t = ctx.input('t');
     if (scheme.startsWith('a') && t === undefined) {
-      ctx.diag('error', 'missing-input', 'type a reference points lie at multiples of the plate thickness: state `t`', ctx.rangeOf('sigma_x1'));
+      ctx.diag(
+        'error',
+        'missing-input',
+        'type a reference points lie at multiples of the plate thickness: state `t`',
+        ctx.rangeOf('sigma_x1'),
+      );
       return null;
     }
     const c = hotSpotStress(scheme, vals as number[], t);
@@ -706,9 +766,19 @@ function normalStress(
   if (ctx.has('delta_sigma')) {
     const v = ctx.input('delta_sigma')!;
     if (ctx.has('sigma_max'))
-      ctx.diag('error', 'load-twice', 'state the range as `delta_sigma` or as `sigma_max`/`sigma_min`, not both', ctx.rangeOf('sigma_max'));
+      ctx.diag(
+        'error',
+        'load-twice',
+        'state the range as `delta_sigma` or as `sigma_max`/`sigma_min`, not both',
+        ctx.rangeOf('sigma_max'),
+      );
     if (v < 0) {
-      ctx.diag('error', 'absurd-value', '`delta_sigma` is a range: it cannot be negative', ctx.rangeOf('delta_sigma'));
+      ctx.diag(
+        'error',
+        'absurd-value',
+        '`delta_sigma` is a range: it cannot be negative',
+        ctx.rangeOf('delta_sigma'),
+      );
       return null;
     }
     return { type, name: 'delta_sigma', where: ctx.rangeOf('delta_sigma'), maxRange: v };
@@ -717,7 +787,12 @@ function normalStress(
     const mx = ctx.input('sigma_max')!;
     const mn = ctx.input('sigma_min')!;
     if (mx < mn) {
-      ctx.diag('error', 'max-below-min', '`sigma_max` is below `sigma_min`: swap them', ctx.rangeOf('sigma_max'));
+      ctx.diag(
+        'error',
+        'max-below-min',
+        '`sigma_max` is below `sigma_min`: swap them',
+        ctx.rangeOf('sigma_max'),
+      );
       return null;
     }
     const relieved = (ctx.option('residual-stress') ?? 'as-welded') === 'stress-relieved';
@@ -727,13 +802,25 @@ function normalStress(
       range: ctx.rangeOf('sigma_max'),
       meaning: `${typeWords(type)} stress range at the detail`,
     });
-    return { type, name: 'delta_sigma', where: ctx.rangeOf('sigma_max'), maxRange: v ?? 0, sigmaMax: mx, sigmaMin: mn };
+    return {
+      type,
+      name: 'delta_sigma',
+      where: ctx.rangeOf('sigma_max'),
+      maxRange: v ?? 0,
+      sigmaMax: mx,
+      sigmaMin: mn,
+    };
   }
   if (type === 'nominal' && (ctx.has('F_max') || ctx.has('M_max'))) {
     const W = ctx.input('W');
     const t = ctx.input('t');
     if (W === undefined || t === undefined) {
-      ctx.diag('error', 'missing-input', 'the nominal stress from forces and moments needs the plate section: its width `W` and thickness `t`', ctx.rangeOf(ctx.has('F_max') ? 'F_max' : 'M_max'));
+      ctx.diag(
+        'error',
+        'missing-input',
+        'the nominal stress from forces and moments needs the plate section: its width `W` and thickness `t`',
+        ctx.rangeOf(ctx.has('F_max') ? 'F_max' : 'M_max'),
+      );
       return null;
     }
     const dF = (ctx.input('F_max') ?? 0) - (ctx.input('F_min') ?? 0);
@@ -761,14 +848,25 @@ function normalStress(
 }
 
 function typeWords(t: WeldStressType): string {
-  return t === 'hot-spot' ? 'structural hot-spot' : t === 'notch' ? 'effective notch' : t === 'throat' ? 'throat' : 'nominal';
+  return t === 'hot-spot'
+    ? 'structural hot-spot'
+    : t === 'notch'
+      ? 'effective notch'
+      : t === 'throat'
+        ? 'throat'
+        : 'nominal';
 }
 
 function shearRange(ctx: CheckContext): { range: number; where: Range } | undefined {
   if (ctx.has('delta_tau')) {
     const v = ctx.input('delta_tau')!;
     if (v < 0) {
-      ctx.diag('error', 'absurd-value', '`delta_tau` is a range: it cannot be negative', ctx.rangeOf('delta_tau'));
+      ctx.diag(
+        'error',
+        'absurd-value',
+        '`delta_tau` is a range: it cannot be negative',
+        ctx.rangeOf('delta_tau'),
+      );
       return undefined;
     }
     return { range: v, where: ctx.rangeOf('delta_tau') };
@@ -779,10 +877,15 @@ function shearRange(ctx: CheckContext): { range: number; where: Range } | undefi
     ctx.diag('error', 'missing-load-pair', 'state both `tau_max` and `tau_min`', ctx.rangeOf('tau_max'));
     return undefined;
   }
-  const v = ctx.result('delta_tau', computed(Math.abs(mx - mn), 'delta_tau = |tau_max - tau_min|', 'the note'), ['tau_max', 'tau_min'], {
-    dim: 'stress',
-    range: ctx.rangeOf('tau_max'),
-  });
+  const v = ctx.result(
+    'delta_tau',
+    computed(Math.abs(mx - mn), 'delta_tau = |tau_max - tau_min|', 'the note'),
+    ['tau_max', 'tau_min'],
+    {
+      dim: 'stress',
+      range: ctx.rangeOf('tau_max'),
+    },
+  );
   return { range: v ?? 0, where: ctx.rangeOf('tau_max') };
 }
 
@@ -817,7 +920,12 @@ function normalClass(
     };
     const c = catalogueClass(entry.key, standard, material, params);
     for (const n of stressTypeNotes(entry.stressType, usedType))
-      ctx.diag(n.severity ?? 'error', n.code, `\`detail: ${entry.key}\`: ${n.message}`, ctx.optionRange('detail'));
+      ctx.diag(
+        n.severity ?? 'error',
+        n.code,
+        `\`detail: ${entry.key}\`: ${n.message}`,
+        ctx.optionRange('detail'),
+      );
     if (entry.stressType !== usedType) return null;
     const v = ctx.result('delta_sigma_C', c, [], {
       dim: 'stress',
@@ -830,13 +938,32 @@ function normalClass(
   if (usedType === 'hot-spot' && standard === 'IIW') {
     const joint = (ctx.option('joint') ?? 'load-carrying') as 'load-carrying' | 'non-load-carrying';
     if (!ctx.options.has('joint'))
-      ctx.diag('warning', 'defaulted-option', 'no `joint:` stated: the load-carrying hot-spot class (the lower) is taken', ctx.optionRange('stress-type'));
-    return ctx.result('delta_sigma_C', hotSpotClass(joint, material), [], { dim: 'stress', range: ctx.optionRange('stress-type'), origin: 'library', meaning: 'structural hot-spot class at 2e6 cycles' });
+      ctx.diag(
+        'warning',
+        'defaulted-option',
+        'no `joint:` stated: the load-carrying hot-spot class (the lower) is taken',
+        ctx.optionRange('stress-type'),
+      );
+    return ctx.result('delta_sigma_C', hotSpotClass(joint, material), [], {
+      dim: 'stress',
+      range: ctx.optionRange('stress-type'),
+      origin: 'library',
+      meaning: 'structural hot-spot class at 2e6 cycles',
+    });
   }
   if (usedType === 'notch' && standard === 'IIW')
-    return ctx.result('delta_sigma_C', notchStressClass(material, 'principal'), [], { dim: 'stress', range: ctx.optionRange('stress-type'), origin: 'library', meaning: 'effective notch stress class (1 mm reference radius, principal stress)' });
+    return ctx.result('delta_sigma_C', notchStressClass(material, 'principal'), [], {
+      dim: 'stress',
+      range: ctx.optionRange('stress-type'),
+      origin: 'library',
+      meaning: 'effective notch stress class (1 mm reference radius, principal stress)',
+    });
   if (usedType === 'throat')
-    return ctx.result('delta_sigma_C', throatClass(standard, 'normal', material), [], { dim: 'stress', origin: 'library', meaning: 'weld-metal class for root failure (range on the throat)' });
+    return ctx.result('delta_sigma_C', throatClass(standard, 'normal', material), [], {
+      dim: 'stress',
+      origin: 'library',
+      meaning: 'weld-metal class for root failure (range on the throat)',
+    });
   ctx.diag(
     'error',
     'missing-weld-class',
@@ -846,11 +973,25 @@ function normalClass(
   return null;
 }
 
-function shearClass(ctx: CheckContext, standard: WeldStandard, material: WeldMaterial, throat: boolean): number | null {
+function shearClass(
+  ctx: CheckContext,
+  standard: WeldStandard,
+  material: WeldMaterial,
+  throat: boolean,
+): number | null {
   if (ctx.has('delta_tau_C')) return ctx.input('delta_tau_C')!;
   if (throat)
-    return ctx.result('delta_tau_C', throatClass(standard, 'shear', material), [], { dim: 'stress', origin: 'library', meaning: 'class of the shear on the throat' });
-  ctx.diag('error', 'missing-weld-class', 'a shear range needs its class: state `delta_tau_C` (the shear class at 2e6 cycles)', ctx.rangeOf('delta_tau'));
+    return ctx.result('delta_tau_C', throatClass(standard, 'shear', material), [], {
+      dim: 'stress',
+      origin: 'library',
+      meaning: 'class of the shear on the throat',
+    });
+  ctx.diag(
+    'error',
+    'missing-weld-class',
+    'a shear range needs its class: state `delta_tau_C` (the shear class at 2e6 cycles)',
+    ctx.rangeOf('delta_tau'),
+  );
   return null;
 }
 
@@ -887,13 +1028,22 @@ function correctClass(
       if (!entry && t > 25 * MM)
         c.notes = [
           ...(c.notes ?? []),
-          { code: 'size-effect-assumed', severity: 'information', message: 'The class is stated without a catalogue detail: the size effect is applied (on the safe side); state `k_s = 1` where the detail table names none.' },
+          {
+            code: 'size-effect-assumed',
+            severity: 'information',
+            message:
+              'The class is stated without a catalogue detail: the size effect is applied (on the safe side); state `k_s = 1` where the detail table names none.',
+          },
         ];
     } else {
-      const group = (ctx.option('thickness-group') as IiwThicknessJoint | undefined) ?? joint ?? 'toe-as-welded';
+      const group =
+        (ctx.option('thickness-group') as IiwThicknessJoint | undefined) ?? joint ?? 'toe-as-welded';
       c = iiwThicknessFactor(t, group);
     }
-    const ks = ctx.result('k_s', c, ['t'], { range: ctx.rangeOf('t'), meaning: 'thickness (size) factor on the class' });
+    const ks = ctx.result('k_s', c, ['t'], {
+      range: ctx.rangeOf('t'),
+      meaning: 'thickness (size) factor on the class',
+    });
     if (ks !== null) {
       value *= ks;
       inputs.push('k_s');
@@ -903,18 +1053,27 @@ function correctClass(
   const residual = (ctx.option('residual-stress') ?? 'as-welded') as ResidualCondition;
   if (standard === 'IIW' && stressed.sigmaMax !== undefined && stressed.sigmaMin !== undefined) {
     const c = iiwStressRatioFactor(stressed.sigmaMax, stressed.sigmaMin, residual);
-    const f = ctx.result('f_R', c, ['sigma_max', 'sigma_min'], { range: ctx.optionRange('residual-stress') ?? stressed.where, meaning: 'stress-ratio enhancement factor on the class (1 as welded)' });
+    const f = ctx.result('f_R', c, ['sigma_max', 'sigma_min'], {
+      range: ctx.optionRange('residual-stress') ?? stressed.where,
+      meaning: 'stress-ratio enhancement factor on the class (1 as welded)',
+    });
     if (f !== null) {
       value *= f;
       inputs.push('f_R');
     }
   } else if (residual !== 'as-welded' && standard === 'IIW')
-    ctx.diag('information', 'no-enhancement', 'the stress-ratio enhancement needs the cycle: state `sigma_max` and `sigma_min` (with a range only, f(R) = 1)', ctx.optionRange('residual-stress'));
+    ctx.diag(
+      'information',
+      'no-enhancement',
+      'the stress-ratio enhancement needs the cycle: state `sigma_max` and `sigma_min` (with a range only, f(R) = 1)',
+      ctx.optionRange('residual-stress'),
+    );
   // Improvement.
   let m1: number | undefined;
   const imp = ctx.option('improvement');
   if (imp && imp !== 'none') {
-    const R = stressed.sigmaMax && stressed.sigmaMax > 0 ? (stressed.sigmaMin ?? 0) / stressed.sigmaMax : undefined;
+    const R =
+      stressed.sigmaMax && stressed.sigmaMax > 0 ? (stressed.sigmaMin ?? 0) / stressed.sigmaMax : undefined;
     const c = improvedClass({
       standard,
       FAT: value,
@@ -924,7 +1083,11 @@ function correctClass(
       ...(R !== undefined ? { R } : {}),
       failure: stressed.type === 'throat' ? 'root' : 'toe',
     });
-    const v = ctx.result('delta_sigma_C_imp', c, [...inputs], { dim: 'stress', range: ctx.optionRange('improvement'), meaning: 'class after the stated post-weld improvement' });
+    const v = ctx.result('delta_sigma_C_imp', c, [...inputs], {
+      dim: 'stress',
+      range: ctx.optionRange('improvement'),
+      meaning: 'class after the stated post-weld improvement',
+    });
     if (v === null || c.notes?.some((n) => n.severity === 'error')) return null;
     value = v;
     m1 = c.m1 !== 3 ? c.m1 : undefined;
@@ -932,10 +1095,34 @@ function correctClass(
   }
   const eff = ctx.result(
     'delta_sigma_C_eff',
-    computed(value, 'delta_sigma_C_eff = delta_sigma_C * k_s * f_R (improved class where stated)', 'the corrections of the standard on the class'),
+    computed(
+      value,
+      'delta_sigma_C_eff = delta_sigma_C * k_s * f_R (improved class where stated)',
+      'the corrections of the standard on the class',
+    ),
     inputs,
     { dim: 'stress', meaning: 'detail class after the corrections (the curve is drawn through it)' },
   );
   if (eff === null || !(eff > 0)) return null;
   return { value: eff, ...(m1 !== undefined ? { m1 } : {}) };
+}
+
+/**
+ * The range verification against a permissible damage sum below 1 (IIW 0.5): the equivalent
+ * range at 2e6 cycles may reach D_allow^(1/m1) of the design class, so that u <= 1 holds exactly
+ * when D_sum <= D_allow. With D_allow = 1 (EN 1993-1-9) it is the utilisation of Eq. (8.2).
+ */
+function allowedUtilisation(u: Computed, Dallow: number, m1: number): Computed {
+  if (u.notes?.some((n) => n.severity === 'error') || !(Dallow > 0) || Dallow === 1) return u;
+  const f = Dallow ** (1 / m1);
+  return {
+    ...u,
+    value: u.value / f,
+    formula: `${u.formula} / D_allow^(1/m1)`,
+    terms: [
+      ...(u.terms ?? []),
+      { name: 'D_allow', value: Dallow, unit: '' },
+      { name: 'm1', value: m1, unit: '' },
+    ],
+  };
 }
