@@ -60,6 +60,7 @@ import {
   type WeldSnCurve,
   type WeldStandard,
   type WeldStressType,
+  weldStrengthAtLife,
 } from '../../weld';
 import type { MethodExtras } from '../types';
 
@@ -275,7 +276,10 @@ export function runWeld(ctx: CheckContext): MethodExtras {
     meaning: 'cycles to the permissible damage sum on the design curve',
   });
   // Equivalent range at 2e6 (exactly the range whose 2e6 cycles do the same damage on the m1 branch).
-  const eq = equivalentRange(D, curve, gammaFf, gammaMf);
+  const eq =
+    loading.kind === 'constant'
+      ? constantEquivalent(curve, stressed.maxRange, loading.N)
+      : equivalentRange(D, curve, gammaFf, gammaMf);
   const dE2 = ctx.result('delta_sigma_E2', eq, ['D_sum', 'delta_sigma_C_eff', 'gamma_Ff', 'gamma_Mf'], {
     dim: 'stress',
     range: loadWhere,
@@ -298,11 +302,11 @@ export function runWeld(ctx: CheckContext): MethodExtras {
           : iiwCurve(tcls, edition!, { stress: 'shear', material }).curve;
       const tacc = new WeldDamageAccumulator(tcurve, { loading: 'constant', gammaFf, gammaMf });
       tacc.add(tau.range, loading.N);
-      const Dt = ctx.result('D_tau', tacc.result(0), ['delta_tau_C', 'delta_tau'], {
+      ctx.result('D_tau', tacc.result(0), ['delta_tau_C', 'delta_tau'], {
         range: tau.where,
         meaning: 'Miner damage of the shear range on the shear curve',
       });
-      const eqt = equivalentRange(Dt ?? 0, tcurve, gammaFf, gammaMf);
+      const eqt = constantEquivalent(tcurve, tau.range, loading.N);
       const dtE2 = ctx.result('delta_tau_E2', eqt, ['D_tau'], {
         dim: 'stress',
         range: tau.where,
@@ -423,8 +427,15 @@ function damageTable(
 
 function factor(ctx: CheckContext, name: string, c: Computed): number | null {
   const bad = c.notes?.some((n) => n.severity === 'error');
+  // A defaulted factor is shown where its default comes from: gamma_Ff at the standard,
+  // gamma_Mf at the assessment concept or consequence class (or the block's header).
+  const where = ctx.has(name)
+    ? ctx.rangeOf(name)
+    : name === 'gamma_Ff'
+      ? (ctx.optionRange('standard') ?? ctx.header)
+      : (ctx.optionRange('assessment') ?? ctx.optionRange('consequence') ?? ctx.header);
   const v = ctx.result(name, c, [], {
-    range: ctx.rangeOf(name),
+    range: where,
     meaning:
       name === 'gamma_Ff'
         ? 'partial factor on the fatigue load (stress ranges)'
@@ -1125,4 +1136,30 @@ function allowedUtilisation(u: Computed, Dallow: number, m1: number): Computed {
       { name: 'm1', value: m1, unit: '' },
     ],
   };
+}
+
+/**
+ * Constant amplitude: the range at 2e6 cycles that the curve rates as the stated range at its N
+ * cycles, Delta sigma_E,2 = Delta sigma Delta sigma_C / Delta sigma_R(N), so that the verification
+ * gamma_Ff Delta sigma_E,2 <= Delta sigma_C / gamma_Mf (EN 1993-1-9 Eq. 8.2) is the check of the
+ * range at N on the curve, gamma_Ff Delta sigma <= Delta sigma_R(N) / gamma_Mf: at N = 2e6 the
+ * range itself, beyond the knee the fatigue limit (never zero for a range below it).
+ */
+function constantEquivalent(curve: WeldSnCurve, range: number, N: number): Computed {
+  const R = weldStrengthAtLife(curve, N, 'constant');
+  const formula = 'Delta sigma_E,2 = Delta sigma Delta sigma_C / Delta sigma_R(N) (constant amplitude)';
+  if (R.notes?.some((n) => n.severity === 'error') || !(R.value > 0))
+    return computed(0, formula, curve.source, R.terms, R.notes);
+  return computed(
+    (range * curve.deltaC) / R.value,
+    formula,
+    curve.source,
+    [
+      { name: 'Delta sigma', value: range / MPA, unit: 'MPa' },
+      { name: 'Delta sigma_C', value: curve.deltaC / MPA, unit: 'MPa' },
+      { name: 'Delta sigma_R(N)', value: R.value / MPA, unit: 'MPa' },
+      { name: 'N', value: N, unit: '' },
+    ],
+    R.notes?.filter((n) => n.severity !== 'information'),
+  );
 }
