@@ -5,6 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { type CheckResult, evaluateNote, type HistoryChunkReader } from '../../shared-core/src';
+import { checkDiagrams } from '../../shared-core/src/methods/registry';
 import { KSI, MPA, si } from './helpers';
 
 const IN = 0.0254;
@@ -639,6 +640,63 @@ describe('diagnostics of a weld check, on their lines', () => {
       'N = 1e6',
     ]);
     expect(errorsOf(c)).toContain('weld-standard-material');
+  });
+  it('a shear range with a spectrum: error on its line (leaving it out could pass a failing interaction)', () => {
+    const { c, text } = evaluate([
+      'method: weld',
+      'standard: en-1993-1-9',
+      'delta_sigma_C = 71 MPa',
+      'delta_tau_C = 80 MPa',
+      'delta_tau = 30 MPa',
+      ...FACTORS,
+      'spectrum: delta_sigma = 50 MPa, n = 1e6',
+    ]);
+    const d = diag(c, 'shear-variable-amplitude');
+    expect(d.severity).toBe('error');
+    expect(d.range.start.line).toBe(lineOf(text, 'delta_tau ='));
+    expect(c.values.u_fat).toBeUndefined();
+  });
+  it('a library steel gives Sy for the range limit (ASTM A36, Sy = 250 MPa: 1.5 fy = 375 MPa)', () => {
+    const { c } = evaluate([
+      'method: weld',
+      'standard: en-1993-1-9',
+      'material: astm-a36',
+      'delta_sigma_C = 71 MPa',
+      'delta_sigma = 380 MPa',
+      'N = 1e4',
+      ...FACTORS,
+    ]);
+    expect(si(c, 'Sy')).toBe(250 * MPA);
+    expect(errorsOf(c)).toContain('stress-range-limit');
+    const ti = evaluate([
+      'method: weld',
+      'standard: iiw-2016',
+      'material-family: titanium',
+      'delta_sigma_C = 71 MPa',
+      'delta_sigma = 80 MPa',
+      'N = 1e4',
+    ]).c;
+    expect(errorsOf(ti)).toContain('weld-standard-material');
+  });
+  it('the S-N diagram: design curve, knee, cut-off and the spectrum ranges at their lives', () => {
+    const { c } = evaluate([
+      'method: weld',
+      'standard: en-1993-1-9',
+      'delta_sigma_C = 80 MPa',
+      ...FACTORS,
+      'D_allow = 1',
+      'spectrum: delta_sigma = 110 MPa, n = 2e4',
+      'spectrum: delta_sigma = 40 MPa, n = 1e6',
+    ]);
+    const d = checkDiagrams(c).find((x) => x.kind === 'weld-sn');
+    expect(d).toBeDefined();
+    for (const role of ['design-curve', 'knee', 'cut-off', 'level'])
+      expect(d!.svg).toContain(`data-role="${role}"`);
+    expect(d!.svg.match(/data-role="level"/g)?.length).toBe(2);
+    // The data it draws: the design curve (class / gamma_Mf) and the ranges x gamma_Ff with their lives.
+    const w = c.weldSn![0];
+    expect(rel(w.deltaC, (80 / 1.35) * MPA)).toBeLessThan(1e-12);
+    expect(rel(w.points[0].N!, enLife(110 * MPA, 80 * MPA, 1.35, true))).toBeLessThan(1e-9);
   });
   it('every value is finite or marked infinite, and the S-N diagram draws', () => {
     const { c } = evaluate([

@@ -14,6 +14,8 @@
  *    or a `history:` of the stress through the rainflow counter; damage on the design curve, the
  *    equivalent range at 2e6 cycles, the utilisation, the safety factor on stress range, the life.
  */
+
+import { statedFamily } from '../../checks/material';
 import { type Computed, computed, MM, MPA } from '../../computed';
 import type { CheckContext } from '../../context/checkContext';
 import { ExpressionError, type Quantity } from '../../context/quantity';
@@ -78,9 +80,20 @@ const NOT_FOR_WELDS: Record<string, string> = {
     'a mean-stress criterion does not apply to a welded detail: residual stresses near yield make the local cycle tensile whatever the applied mean, so the class holds for the stress range alone (a stress-relieved joint is credited by `residual-stress:`)',
   surface:
     'the surface factor of the Marin chain does not apply to a weld: the weld profile and its surface are part of the detail class',
+  'load-line':
+    'a load line belongs to a mean-stress criterion, which does not apply to a welded detail: the class holds for the stress range alone',
+  'mean-concentration':
+    'the notch of a weld is in its detail class: no fatigue concentration acts on a mean stress',
+  feature:
+    'a stress-concentration fit does not apply to a weld: the local geometry is in the detail class (or use `stress-type: hot-spot` or `effective-notch`)',
+  miner:
+    "the knee of a weld curve is the standard's (EN 1993-1-9: m = 5 to the cut-off; IIW: by edition), not a `miner:` choice",
 };
 /** Dimension vector of a force per length (N/m = kg s^-2). */
 const FORCE_PER_LENGTH = [1, 0, -2, 0, 0, 0, 0, 0, 0];
+
+/** Families whose welds the standards' classes cover. */
+const WELD_FAMILIES = new Set(['steel', 'stainless-steel', 'aluminium-wrought', 'aluminium-cast']);
 
 const MARIN = ['ka', 'kb', 'kc', 'kd', 'ke', 'kmisc', 'Se', 'Se_prime', 'Kt', 'Kf', 'q', 'Sut'];
 
@@ -121,14 +134,25 @@ export function runWeld(ctx: CheckContext): MethodExtras {
     return {};
   }
   const { standard, edition } = STANDARDS[stdWord];
-  const fam = ctx.option('material-family');
-  const material: WeldMaterial = fam?.startsWith('aluminium') ? 'aluminium' : 'steel';
+  // The family from the library key or `material-family:`; classes exist for steels and aluminium.
+  const named = statedFamily(ctx);
+  const famWhere = ctx.optionRange('material') ?? ctx.optionRange('material-family');
+  if (named && !WELD_FAMILIES.has(named.family)) {
+    ctx.diag(
+      'error',
+      'weld-standard-material',
+      `the weld classes of EN 1993-1-9 and the IIW recommendations are for steels and aluminium alloys, not ${named.family}: state a steel or an aluminium family`,
+      famWhere,
+    );
+    return {};
+  }
+  const material: WeldMaterial = named?.family.startsWith('aluminium') ? 'aluminium' : 'steel';
   if (material === 'aluminium' && standard === 'EN 1993-1-9') {
     ctx.diag(
       'error',
       'weld-standard-material',
       'EN 1993-1-9 covers steel only: check an aluminium detail with `standard: iiw-2016` (or EN 1999-1-3, not implemented)',
-      ctx.optionRange('material-family'),
+      famWhere,
     );
     return {};
   }
@@ -142,8 +166,20 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   const stressed = normalStress(ctx, stressType, entry?.stressType === 'throat', loading);
   if (stressed === null) return {};
   const usedType: WeldStressType = stressed.type;
-  const hasShear = ctx.has('delta_tau') || ctx.has('tau_max');
+  const hasShear = ctx.has('delta_tau') || ctx.has('tau_max') || ctx.has('tau_min');
+  if (hasShear && loading.kind !== 'constant') {
+    // Leaving the shear out would pass a detail that the interaction may fail.
+    const name = ctx.has('delta_tau') ? 'delta_tau' : ctx.has('tau_max') ? 'tau_max' : 'tau_min';
+    ctx.diag(
+      'error',
+      'shear-variable-amplitude',
+      `a shear range with a ${loading.kind} is not checked here (the normal and shear cycles of a spectrum or history would have to be paired): check the shear in a check of its own (a \`spectrum:\` of its ranges with \`delta_tau_C\` as the class) or as constant amplitude with \`N\`, and combine the utilisations by the standard's interaction`,
+      ctx.rangeOf(name),
+    );
+    return {};
+  }
   const tau = hasShear && loading.kind === 'constant' ? shearRange(ctx) : undefined;
+  if (hasShear && tau === undefined) return {};
 
   // 2. The class.
   const cls = normalClass(ctx, standard, material, usedType, entry, detailKey);
@@ -186,7 +222,16 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   if (gammaFf === null || gammaMf === null) return {};
 
   // Range limit relative to yield.
-  const Sy = ctx.input('Sy');
+  const Sy =
+    ctx.input('Sy') ??
+    (named?.material
+      ? ctx.library(
+          'Sy',
+          named.material.Sy,
+          `${named.material.name} (${named.material.condition}): ${named.material.source}`,
+          ctx.optionRange('material'),
+        )
+      : undefined);
   if (Sy !== undefined) {
     const maxRange = stressed.maxRange;
     const lim = stressRangeLimit(standard, maxRange, Sy, 'normal', usedType);
