@@ -393,7 +393,7 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   });
 
   const design: WeldSnData = {
-    label: curve.label,
+    label: `${curve.label}, divided by gamma_Mf = ${gammaMf}`,
     stress: 'normal',
     deltaC: curve.deltaC / gammaMf,
     m1: curve.m1,
