@@ -292,6 +292,23 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   const total = cycles.reduce((s, c) => s + c.count, 0);
   const loadWhere = loading.kind === 'spectrum' ? loading.levels[0].stmt.whole : loading.range;
   const dInputs = ['delta_sigma_C_eff', 'gamma_Ff', 'gamma_Mf', stressed.name];
+  if (standard === 'IIW' && edition === '2016' && loading.kind !== 'constant') {
+    // The two editions treat the ranges below the knee differently (m = 22 against m2 = 5); the
+    // 2016 slope rests on a recalled copy, so the note is told what the more onerous one gives.
+    const alt = new WeldDamageAccumulator(
+      iiwCurve(corrected.value, '2008', { stress: 'normal', material, m1: corrected.m1 }).curve,
+      { loading: 'variable', gammaFf, gammaMf },
+    );
+    for (const c of cycles) alt.add(c.range, c.count);
+    const D08 = alt.result(0).D;
+    if (D08 > 1.05 * dmg.D)
+      ctx.diag(
+        'warning',
+        'knee-slope-edition',
+        `the IIW 2016 curve counts the ranges below the knee with m = 22 (a recalled copy: check it against the edition in use); the 2008 slope m2 = 5 gives D_sum = ${D08.toPrecision(4)}, ${(dmg.D > 0 ? D08 / dmg.D : Number.POSITIVE_INFINITY) < 1e6 ? `${(D08 / Math.max(dmg.D, 1e-300)).toPrecision(3)} times` : 'far above'} this one: state \`standard: iiw-2008\` for the more onerous treatment`,
+        loadWhere,
+      );
+  }
   const D =
     ctx.result('D_sum', dmg, dInputs, {
       range: loadWhere,
