@@ -463,6 +463,70 @@ describe('thickness, throat, interaction', () => {
     const ut = 45 / 80;
     expect(rel(si(c, 'u_fat'), (us ** 2 + ut ** 2) / 0.5)).toBeLessThan(1e-9);
   });
+  it('stress-relieved: EN takes 60 % of the compressive part of the range (Sec. 7.2.1), the IIW f(R) on the class, never both', () => {
+    const en = evaluate([
+      'method: weld',
+      'standard: en-1993-1-9',
+      'residual-stress: stress-relieved',
+      'delta_sigma_C = 71 MPa',
+      'sigma_max = 40 MPa',
+      'sigma_min = -60 MPa',
+      'N = 1e6',
+      ...FACTORS,
+    ]).c;
+    expect(si(en, 'delta_sigma')).toBeCloseTo((40 + 0.6 * 60) * MPA, 3);
+    // IIW case I (Hobbacher 2016 Sec. 3.3.4, from memory): R = -1.5 < -1 -> f(R) = 1.6; the full range 100 MPa.
+    const iiw = evaluate([
+      'method: weld',
+      'standard: iiw-2016',
+      'residual-stress: stress-relieved',
+      'delta_sigma_C = 71 MPa',
+      'sigma_max = 40 MPa',
+      'sigma_min = -60 MPa',
+      'N = 1e6',
+      'gamma_Ff = 1.0',
+      'gamma_Mf = 1.0',
+    ]).c;
+    expect(si(iiw, 'delta_sigma')).toBeCloseTo(100 * MPA, 3);
+    expect(si(iiw, 'f_R')).toBeCloseTo(1.6, 10);
+    // As welded: the full range and no enhancement, in both.
+    const aw = evaluate([
+      'method: weld',
+      'standard: iiw-2016',
+      'delta_sigma_C = 71 MPa',
+      'sigma_max = 40 MPa',
+      'sigma_min = -60 MPa',
+      'N = 1e6',
+      'gamma_Ff = 1.0',
+      'gamma_Mf = 1.0',
+    ]).c;
+    expect(si(aw, 'f_R')).toBe(1);
+    expect(si(aw, 'delta_sigma_C_eff')).toBe(71 * MPA);
+  });
+  it('a class stated on the throat with a root-failure detail needs no force: cruciform-root, delta_sigma on the throat', () => {
+    const { c } = evaluate([
+      'method: weld',
+      'standard: en-1993-1-9',
+      'detail: cruciform-root',
+      'delta_sigma = 30 MPa',
+      'N = 1e6',
+      ...FACTORS,
+    ]);
+    expect(errorsOf(c)).toEqual([]);
+    expect(si(c, 'delta_sigma_C')).toBe(36 * MPA);
+  });
+  it('a class in the wrong unit (71 Pa) is an error, no curve', () => {
+    const { c } = evaluate([
+      'method: weld',
+      'standard: en-1993-1-9',
+      'delta_sigma_C = 71 Pa',
+      'delta_sigma = 30 MPa',
+      'N = 1e6',
+      ...FACTORS,
+    ]);
+    expect(c.status).toBe('error');
+    expect(c.values.D_sum).toBeUndefined();
+  });
 });
 
 describe('loads: compressive, zero mean, US units', () => {

@@ -163,7 +163,7 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   // 1. The stress at the detail.
   const loading = readLoading(ctx);
   if (loading === null) return {};
-  const stressed = normalStress(ctx, stressType, entry?.stressType === 'throat', loading);
+  const stressed = normalStress(ctx, stressType, entry?.stressType === 'throat', loading, standard);
   if (stressed === null) return {};
   const usedType: WeldStressType = stressed.type;
   const hasShear = ctx.has('delta_tau') || ctx.has('tau_max') || ctx.has('tau_min');
@@ -195,10 +195,16 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   const curve = curveRes.curve;
   ctx.result(
     'delta_sigma_D',
-    computed(curve.deltaD, curveRes.formula, curve.source, curveRes.terms),
+    computed(curve.deltaD, curveRes.formula, curve.source, curveRes.terms, curveRes.notes),
     ['delta_sigma_C_eff'],
-    { dim: 'stress', meaning: 'knee of the S-N curve (constant-amplitude fatigue limit for EN 1993-1-9)' },
+    {
+      dim: 'stress',
+      range: ctx.has('delta_sigma_C') ? ctx.rangeOf('delta_sigma_C') : undefined,
+      meaning: 'knee of the S-N curve (constant-amplitude fatigue limit for EN 1993-1-9)',
+    },
   );
+  // A class no standard has (below 1 MPa, above 1000 MPa: a wrong unit) gives no curve.
+  if (curveRes.notes?.some((n) => n.severity === 'error')) return {};
   if (curve.deltaL !== null)
     ctx.result(
       'delta_sigma_L',
@@ -707,6 +713,7 @@ function normalStress(
   stressType: 'nominal' | 'hot-spot' | 'effective-notch',
   throatDetail: boolean,
   loading: Loading,
+  standard: WeldStandard,
 ): NormalStress | null {
   const type: WeldStressType =
     ctx.has('dF_perp') || throatDetail ? 'throat' : stressType === 'effective-notch' ? 'notch' : stressType;
@@ -751,13 +758,19 @@ function normalStress(
     const a = ctx.input('a_w');
     const F = ctx.input('dF_perp');
     if (a === undefined || F === undefined) {
-      ctx.diag(
-        'error',
-        'missing-input',
-        'the range on the throat of a load-carrying fillet weld needs `dF_perp` (range of the force per length across the weld, e.g. N/mm) and the throat thickness `a_w`; or state `delta_sigma` on the throat',
-        ctx.rangeOf(a === undefined ? 'dF_perp' : 'a_w'),
-      );
-      if (!ctx.has('delta_sigma')) return null;
+      // A range stated on the throat (delta_sigma, sigma_max/sigma_min) needs neither.
+      const stated = ctx.has('delta_sigma') || (ctx.has('sigma_max') && ctx.has('sigma_min'));
+      if (!stated || ctx.has('dF_perp') || ctx.has('a_w')) {
+        ctx.diag(
+          'error',
+          'missing-input',
+          'the range on the throat of a load-carrying fillet weld needs `dF_perp` (range of the force per length across the weld, e.g. N/mm) and the throat thickness `a_w`; or state `delta_sigma` on the throat',
+          ctx.has('dF_perp') || ctx.has('a_w')
+            ? ctx.rangeOf(a === undefined ? 'dF_perp' : 'a_w')
+            : ctx.optionRange('detail'),
+        );
+        return null;
+      }
     } else {
       const fDim = ctx.stated.get('dF_perp')?.q.dim;
       if (!fDim || !sameVector(fDim, FORCE_PER_LENGTH)) {
@@ -868,7 +881,10 @@ function normalStress(
       );
       return null;
     }
-    const relieved = (ctx.option('residual-stress') ?? 'as-welded') === 'stress-relieved';
+    // EN 1993-1-9 credits a stress-relieved detail on the range (60 % of the compressive part);
+    // the IIW credits it on the class (f(R), below): never both.
+    const relieved =
+      standard === 'EN 1993-1-9' && (ctx.option('residual-stress') ?? 'as-welded') === 'stress-relieved';
     const c = enEffectiveRange(mx, mn, relieved);
     const v = ctx.result('delta_sigma', c, ['sigma_max', 'sigma_min'], {
       dim: 'stress',
