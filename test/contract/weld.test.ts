@@ -538,6 +538,36 @@ describe('loads: compressive, zero mean, US units', () => {
     for (const c of [b, z]) expect(si(c, 'D_sum')).toBeCloseTo(si(a, 'D_sum'), 12);
     expect(rel(si(a, 'D_sum'), 1e6 / enLife(80 * MPA, 71 * MPA, 1.35, false))).toBeLessThan(1e-9);
   });
+  it('from the loads on a plate W x t: |dF| / (W t) + 6 |dM| / (W t^2) at the face where they add; a load needs its pair', () => {
+    const { c } = evaluate([
+      'method: weld',
+      'standard: en-1993-1-9',
+      'delta_sigma_C = 71 MPa',
+      'F_max = 50 kN',
+      'F_min = -10 kN',
+      'M_max = -100 N*m',
+      'M_min = 200 N*m',
+      'W = 100 mm',
+      't = 10 mm',
+      'N = 1e6',
+      ...FACTORS,
+    ]);
+    // 60 kN / 1000 mm^2 = 60 MPa; 6 * 300 N*m / (100 mm * 100 mm^2) = 180 MPa: 240 MPa at one face.
+    expect(si(c, 'delta_sigma')).toBeCloseTo(240 * MPA, 3);
+    const half = evaluate([
+      'method: weld',
+      'standard: en-1993-1-9',
+      'delta_sigma_C = 71 MPa',
+      'F_max = 50 kN',
+      'W = 100 mm',
+      't = 10 mm',
+      'N = 1e6',
+      ...FACTORS,
+    ]);
+    const d = diag(half.c, 'missing-load-pair');
+    expect(d.severity).toBe('error');
+    expect(d.range.start.line).toBe(lineOf(half.text, 'F_max'));
+  });
   it('ksi and in give the answer of MPa and mm converted (t = 1.5 in = 38.1 mm: ks = (25/38.1)^0.2)', () => {
     const si_ = evaluate([...base, 'delta_sigma = 80 MPa', 't = 38.1 mm']).c;
     const us = evaluate([

@@ -900,7 +900,22 @@ function normalStress(
       sigmaMin: mn,
     };
   }
-  if (type === 'nominal' && (ctx.has('F_max') || ctx.has('M_max'))) {
+  const loads = ['F_max', 'F_min', 'M_max', 'M_min'];
+  if (type === 'nominal' && loads.some((n) => ctx.has(n))) {
+    // A load without its pair would be read against zero: a reversal would be halved.
+    for (const [a, b] of [
+      ['F_max', 'F_min'],
+      ['M_max', 'M_min'],
+    ])
+      if (ctx.has(a) !== ctx.has(b)) {
+        ctx.diag(
+          'error',
+          'missing-load-pair',
+          `state both \`${a}\` and \`${b}\` (the load's range is their difference)`,
+          ctx.rangeOf(ctx.has(a) ? a : b),
+        );
+        return null;
+      }
     const W = ctx.input('W');
     const t = ctx.input('t');
     if (W === undefined || t === undefined) {
@@ -914,10 +929,11 @@ function normalStress(
     }
     const dF = (ctx.input('F_max') ?? 0) - (ctx.input('F_min') ?? 0);
     const dM = (ctx.input('M_max') ?? 0) - (ctx.input('M_min') ?? 0);
+    // At the face where the axial and the bending ranges add (the loads in phase).
     const c = computed(
-      Math.abs(dF / (W * t) + (6 * dM) / (W * t * t)),
-      'delta_sigma = |(F_max - F_min) / (W t) + 6 (M_max - M_min) / (W t^2)|',
-      'elastic stresses of a rectangular plate section: axial F/A, bending M/(W t^2/6) at the face',
+      Math.abs(dF / (W * t)) + Math.abs((6 * dM) / (W * t * t)),
+      'delta_sigma = |F_max - F_min| / (W t) + 6 |M_max - M_min| / (W t^2)',
+      'elastic stresses of a rectangular plate section: axial F/A, bending M/(W t^2/6), at the face where they add',
     );
     const where = ctx.rangeOf(ctx.has('F_max') ? 'F_max' : 'M_max');
     const v = ctx.result('delta_sigma', c, ['F_max', 'F_min', 'M_max', 'M_min', 'W', 't'], {
