@@ -3,7 +3,7 @@
  * completion, what navigation counts as a use of a name, and what the inline hints show.
  * Expected values are the core's own records (`evaluateNote` of the same text).
  */
-import { evaluateNote } from '@fatigue-notes/core';
+import { evaluateNote, methods } from '@fatigue-notes/core';
 import { describe, expect, it } from 'vitest';
 import { completionsAt } from '../src/lsp/completion';
 import { diagnosticsOf } from '../src/lsp/diagnostics';
@@ -89,7 +89,8 @@ describe('completion', () => {
     expect(got).not.toContain('end_pin');
   });
   it('offers snippets at the start of a line outside blocks (a fence too), nothing inside prose text', () => {
-    expect(labels(v, line('```fatigue end_pin'), 3)).toHaveLength(3);
+    // One snippet per registered method.
+    expect(labels(v, line('```fatigue end_pin'), 3)).toHaveLength(methods().length);
     expect(labels(v, 0, 5)).toEqual([]);
   });
 });

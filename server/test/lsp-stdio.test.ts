@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { checkDiagrams, evaluateNote, shownNames } from '@fatigue-notes/core';
+import { checkDiagrams, evaluateNote, methods, shownNames } from '@fatigue-notes/core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type {
   CodeAction,
@@ -205,11 +205,15 @@ describe('language server over stdio', () => {
     expect(await labels(at('Sy = drive_shaft.Sy', 'Sy', 17))).toEqual(
       expect.arrayContaining(['Se', 'n_f', 'Kf']),
     );
-    expect(await labels({ line: 1, character: 0 })).toEqual([
-      'fatigue check: stress-life',
-      'fatigue check: damage (spectrum)',
-      'fatigue check: crack growth',
-    ]);
+    // One snippet per registered method, in registry order.
+    expect(await labels({ line: 1, character: 0 })).toEqual(methods().map((m) => m.snippet.label));
+    expect(await labels({ line: 1, character: 0 })).toEqual(
+      expect.arrayContaining([
+        'fatigue check: stress-life',
+        'fatigue check: damage (spectrum)',
+        'fatigue check: crack growth',
+      ]),
+    );
     expect(await labels(at('reliability = 0.9', 'reliability'))).toEqual(
       expect.arrayContaining(['require:', 'criterion:', 'Kt']),
     );
