@@ -144,6 +144,8 @@ export interface MethodFields {
   histogram?: { rangeEdges: number[]; meanEdges: number[]; counts: number[][]; unit: string };
   /** Notch-root hysteresis path and strain-life curve, for a strain-life check. */
   strainLife?: StrainLifeData;
+  /** S-N curves of a weld check (design curve and its operating ranges), for its diagram. */
+  weldSn?: WeldSnData[];
 }
 
 /**
@@ -179,6 +181,23 @@ export interface StrainLifeData {
   eps_a_at_transition: number;
   /** The governing loop on the curve: its strain amplitude and life (null: beyond the curve). */
   operating: { eps_a: number; reversals: number | null; sigma_m: number } | null;
+}
+
+/** The design curve of a welded detail and the ranges on it (Pa, cycles), for its S-N diagram. */
+export interface WeldSnData {
+  label: string;
+  stress: 'normal' | 'shear';
+  /** Design curve: the class over gamma_Mf. */
+  deltaC: number;
+  m1: number;
+  ND: number;
+  deltaD: number;
+  /** Slope beyond the knee for this loading; null: no damage below the knee. */
+  m2: number | null;
+  NL: number | null;
+  deltaL: number | null;
+  /** Operating ranges times gamma_Ff, with their cycles and lives (null: no damage). */
+  points: Array<{ label: string; range: number; count: number; N: number | null }>;
 }
 
 export interface CheckResult extends MethodFields {

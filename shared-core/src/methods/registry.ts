@@ -14,9 +14,10 @@ import { strainLife } from './strain-life';
 import { stressLife } from './stress-life';
 import { TEMPLATE_UNITS } from './templateParts';
 import type { DiagramSource, MethodHeadline, MethodModule, MethodTemplate } from './types';
+import { weld } from './weld';
 
 /** The methods, the default (no `method:` stated) first. */
-const METHODS: MethodModule[] = [stressLife, damage, crackGrowth, strainLife];
+const METHODS: MethodModule[] = [stressLife, damage, crackGrowth, strainLife, weld];
 
 const withdraw = new Map<string, () => void>();
 function declare(m: MethodModule): void {

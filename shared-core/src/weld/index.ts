@@ -2,7 +2,7 @@
  * Welded details: S-N curves by detail class (EN 1993-1-9 detail categories, IIW FAT classes), the
  * corrections of the class (thickness, stress ratio, improvement), the stress at the detail
  * (hot-spot extrapolation, notch-stress classes, weld throat), partial factors, variable-amplitude
- * damage and the verification. Pure functions returning `Computed`; not yet wired into a check.
+ * damage and the verification. Pure functions returning `Computed`; `methods/weld/` wires them into `method: weld`.
  */
 export {
   type CatalogueClassResult,

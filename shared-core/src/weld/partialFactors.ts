@@ -63,7 +63,7 @@ export function resistanceFactor(input: PartialFactorInput): Computed {
     notes.push({
       code: 'defaulted-partial-factor',
       severity: 'warning',
-      message: `${name} not stated: ${table[concept][consequence]} is taken, the ${concept} / ${consequence}-consequence value of the table. State ${name}, or the assessment concept and consequence class.`,
+      message: `${name} not stated: ${table[concept][consequence]} is taken, the ${concept} / ${consequence}-consequence value of ${en ? 'EN 1993-1-9 Table 3.1' : 'the IIW table of gamma_M'}${input.concept === undefined && input.consequence === undefined ? ' (the most onerous row)' : ''}. State ${name}, or the assessment concept and consequence class (\`assessment:\`, \`consequence:\`).`,
     });
   }
   if (!en)
