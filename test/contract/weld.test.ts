@@ -814,3 +814,61 @@ describe('diagnostics of a weld check, on their lines', () => {
     expect(c.weldSn?.[0].m2).toBeNull();
   });
 });
+
+describe('weld: a shear range takes part in the life and the safety factor (independent hand check)', () => {
+  // EN 1993-1-9 Sec. 7.1: normal m = 3 to 5e6 (Delta sigma_D = 0.737 C), m = 5 to 1e8; shear
+  // m = 5 to 1e8 (Delta tau_L = 0.457 C). Constant amplitude: Delta R(N) on those curves, flat
+  // beyond the constant-amplitude limit (normal) or the cut-off (shear). Eq. 8.3 interaction:
+  // (gFf Ds / (DR_s(N)/gMf))^3 + (gFf Dt / (DR_t(N)/gMf))^5 <= 1.
+  const normalR = (C: number, N: number) => {
+    const ND = 5e6;
+    const D = C * (2e6 / ND) ** (1 / 3);
+    return N <= ND ? C * (2e6 / N) ** (1 / 3) : D;
+  };
+  const shearR = (C: number, N: number) => C * (2e6 / Math.min(N, 1e8)) ** (1 / 5);
+  const u = (x: number, N: number, ds: number, dt: number, gMf: number) =>
+    ((x * ds) / (normalR(71, N) / gMf)) ** 3 + ((x * dt) / (shearR(80, N) / gMf)) ** 5;
+  const bisect = (f: (x: number) => number, lo: number, hi: number) => {
+    for (let i = 0; i < 200; i++) {
+      const m = Math.sqrt(lo * hi);
+      if (f(m) >= 1) hi = m;
+      else lo = m;
+    }
+    return hi;
+  };
+  const lines = (ds: number, dt: number, gMf: number, N: string) => [
+    'method: weld',
+    'standard: en-1993-1-9',
+    'delta_sigma_C = 71 MPa',
+    'delta_tau_C = 80 MPa',
+    `delta_sigma = ${ds} MPa`,
+    `delta_tau = ${dt} MPa`,
+    't = 20 mm',
+    'Sy = 355 MPa',
+    'gamma_Ff = 1.0',
+    `gamma_Mf = ${gMf}`,
+    `N = ${N}`,
+  ];
+
+  it('n_range scales both ranges until Eq. 8.3 reaches 1 (was the normal range alone: 1.296 for 1.189)', () => {
+    const { c } = evaluate(lines(60, 50, 1.15, '1e6'));
+    const s = bisect((x) => u(x, 1e6, 60, 50, 1.15), 1e-3, 1e3);
+    expect(Math.abs(c.values.n_range.si! / s - 1)).toBeLessThan(1e-6);
+    expect(s).toBeLessThan(60 ** -1 * (normalR(71, 1e6) / 1.15));
+  });
+
+  it('N_f is the cycles at which Eq. 8.3 reaches 1 with the stated ranges (shear counts)', () => {
+    const { c } = evaluate(lines(30, 35, 1.15, '5e7'));
+    const N = bisect((n) => u(1, n, 30, 35, 1.15), 1, 1e15);
+    expect(Math.abs(c.values.N_f.si! / N - 1)).toBeLessThan(1e-6);
+    expect(c.values.repeats.si! * 5e7).toBeCloseTo(c.values.N_f.si!, 0);
+  });
+
+  it('a shear range alone (normal range 0): n_range from the shear curve, not infinite', () => {
+    const { c } = evaluate(lines(0, 30, 1.0, '2e8'));
+    // Beyond 1e8 the shear range is checked against the cut-off Delta tau_L = 0.457 x 80 MPa.
+    const s = (0.457 * 80) / 30;
+    expect(Math.abs(c.values.n_range.si! / s - 1)).toBeLessThan(2e-3);
+    expect(c.values.N_f.infinite).toBe(true);
+  });
+});

@@ -16,7 +16,7 @@
  */
 
 import { statedFamily } from '../../checks/material';
-import { type Computed, computed, MM, MPA } from '../../computed';
+import { type Computed, computed, infinite, MM, MPA } from '../../computed';
 import type { CheckContext } from '../../context/checkContext';
 import { ExpressionError, type Quantity } from '../../context/quantity';
 import type { SpectrumStatement } from '../../context/statements';
@@ -315,6 +315,38 @@ export function runWeld(ctx: CheckContext): MethodExtras {
         loadWhere,
       );
   }
+  // The shear curve of a constant-amplitude check with a shear range: the life, the repeats and
+  // the safety factor on range below take the normal-shear interaction, never the normal range alone.
+  const tcls =
+    tau && loading.kind === 'constant' ? shearClass(ctx, standard, material, usedType === 'throat') : null;
+  const tcurve =
+    tcls === null
+      ? null
+      : standard === 'EN 1993-1-9'
+        ? enCurve(tcls, 'shear').curve
+        : iiwCurve(tcls, edition!, { stress: 'shear', material }).curve;
+  const interactionAt =
+    tau && tcurve && loading.kind === 'constant'
+      ? (x: number, n: number): number => {
+          const us = allowedUtilisation(
+            rangeUtilisation(
+              constantEquivalent(curve, x * stressed.maxRange, n),
+              curve.deltaC,
+              gammaFf,
+              gammaMf,
+            ),
+            Dallow ?? 1,
+            curve.m1,
+          ).value;
+          const ut = allowedUtilisation(
+            rangeUtilisation(constantEquivalent(tcurve, x * tau.range, n), tcurve.deltaC, gammaFf, gammaMf),
+            Dallow ?? 1,
+            tcurve.m1,
+          ).value;
+          return (standard === 'EN 1993-1-9' ? enInteraction(us, ut) : iiwInteraction(us, ut, proportional))
+            .value;
+        }
+      : null;
   const D =
     ctx.result('D_sum', dmg, dInputs, {
       range: loadWhere,
@@ -335,14 +367,30 @@ export function runWeld(ctx: CheckContext): MethodExtras {
     [],
     { range: loadWhere },
   );
-  ctx.result('repeats', blocksToLimit(D, Dallow ?? 1), ['D_sum', 'D_allow'], {
-    range: loadWhere,
-    meaning: 'passes of the spectrum (or of the N cycles) until the damage reaches D_allow',
-  });
-  ctx.result('N_f', cyclesToLimit(D, total, Dallow ?? 1), ['D_sum', 'D_allow', 'cycles_counted'], {
-    range: loadWhere,
-    meaning: 'cycles to the permissible damage sum on the design curve',
-  });
+  const shearLife =
+    interactionAt && loading.kind === 'constant'
+      ? interactionLife(interactionAt, loading.N, curve.source)
+      : null;
+  ctx.result(
+    'repeats',
+    shearLife ? shearLife.repeats : blocksToLimit(D, Dallow ?? 1),
+    shearLife ? ['delta_sigma', 'delta_tau', 'N'] : ['D_sum', 'D_allow'],
+    {
+      range: loadWhere,
+      meaning: 'passes of the spectrum (or of the N cycles) until the damage reaches D_allow',
+    },
+  );
+  ctx.result(
+    'N_f',
+    shearLife ? shearLife.life : cyclesToLimit(D, total, Dallow ?? 1),
+    shearLife ? ['delta_sigma', 'delta_tau'] : ['D_sum', 'D_allow', 'cycles_counted'],
+    {
+      range: loadWhere,
+      meaning: shearLife
+        ? 'cycles at which the normal-shear interaction of the verification reaches 1'
+        : 'cycles to the permissible damage sum on the design curve',
+    },
+  );
   // Equivalent range at 2e6 (exactly the range whose 2e6 cycles do the same damage on the m1 branch).
   const eq =
     loading.kind === 'constant'
@@ -362,12 +410,7 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   // Shear and interaction (constant amplitude).
   let uTau: number | null = null;
   if (tau && loading.kind === 'constant') {
-    const tcls = shearClass(ctx, standard, material, usedType === 'throat');
-    if (tcls !== null) {
-      const tcurve =
-        standard === 'EN 1993-1-9'
-          ? enCurve(tcls, 'shear').curve
-          : iiwCurve(tcls, edition!, { stress: 'shear', material }).curve;
+    if (tcls !== null && tcurve !== null) {
       const tacc = new WeldDamageAccumulator(tcurve, { loading: 'constant', gammaFf, gammaMf });
       tacc.add(tau.range, loading.N);
       ctx.result('D_tau', tacc.result(0), ['delta_tau_C', 'delta_tau'], {
@@ -407,9 +450,11 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   // Safety factor on stress range.
   const Dlim = Dallow ?? 1;
   const sf =
-    loading.kind === 'constant'
-      ? constantAmplitudeSafetyFactor(curve, stressed.maxRange, loading.N, 'constant', gammaFf, gammaMf)
-      : rangeSafetyFactor(curve, cycles, Dlim, { loading: 'variable', gammaFf, gammaMf });
+    interactionAt && loading.kind === 'constant'
+      ? interactionFactor(interactionAt, loading.N, curve.source)
+      : loading.kind === 'constant'
+        ? constantAmplitudeSafetyFactor(curve, stressed.maxRange, loading.N, 'constant', gammaFf, gammaMf)
+        : rangeSafetyFactor(curve, cycles, Dlim, { loading: 'variable', gammaFf, gammaMf });
   ctx.result('n_range', sf, ['delta_sigma_C_eff', 'gamma_Ff', 'gamma_Mf', stressed.name], {
     range: loadWhere,
     meaning: 'safety factor on stress range: the factor on every range that brings the damage to D_allow',
@@ -1256,4 +1301,67 @@ function constantEquivalent(curve: WeldSnCurve, range: number, N: number): Compu
     ],
     R.notes?.filter((n) => n.severity !== 'information'),
   );
+}
+
+/** Bisection of a non-decreasing f on [lo, hi] (log scale) for f = 1; null when f stays below 1. */
+function rootOfOne(f: (x: number) => number, lo: number, hi: number): number | null {
+  if (!(f(hi) >= 1)) return null;
+  if (f(lo) >= 1) return lo;
+  let a = Math.log(lo);
+  let b = Math.log(hi);
+  for (let i = 0; i < 200 && b - a > 1e-12; i++) {
+    const m = (a + b) / 2;
+    if (f(Math.exp(m)) >= 1) b = m;
+    else a = m;
+  }
+  return Math.exp(b);
+}
+
+/**
+ * Safety factor on range with a shear range: the factor s on both ranges at which the
+ * normal-shear interaction of the verification reaches 1 (EN 1993-1-9 Eq. 8.3; IIW's
+ * comparison value), found by bisection; the normal range alone would overstate it.
+ */
+function interactionFactor(at: (x: number, n: number) => number, N: number, source: string): Computed {
+  const formula = 's: u_fat(s Delta sigma, s Delta tau) = 1 at the required cycles N (bisection)';
+  const terms = [{ name: 'N', value: N, unit: '' }];
+  const s = rootOfOne((x) => at(x, N), 1e-6, 1e4);
+  if (s === null) return infinite(formula, source, terms);
+  return computed(s, formula, source, terms);
+}
+
+/**
+ * Life and repeats with a shear range: the cycles N_f at which the interaction of the stated
+ * ranges reaches 1 (the interaction only grows with the cycles), by bisection.
+ */
+function interactionLife(
+  at: (x: number, n: number) => number,
+  N: number,
+  source: string,
+): { life: Computed; repeats: Computed } {
+  const formula = 'N_f: u_fat(Delta sigma, Delta tau) at N_f cycles = 1 (bisection)';
+  const n = rootOfOne((x) => at(1, x), 1, 1e15);
+  if (n === null)
+    return {
+      life: infinite(
+        formula,
+        source,
+        [],
+        [
+          {
+            code: 'no-damage',
+            severity: 'information',
+            message: 'The interaction stays below 1 at every life: below the cut-offs.',
+          },
+        ],
+      ),
+      repeats: infinite('repeats = N_f / N', source, [{ name: 'N', value: N, unit: '' }]),
+    };
+  return {
+    life: computed(n, formula, source, []),
+    repeats: computed(n / N, 'repeats = N_f / N', source, [
+      { name: 'N_f', value: n, unit: '' },
+      { name: 'N', value: N, unit: '' },
+    ]),
+  };
 }
