@@ -87,21 +87,31 @@ export function hotSpotStress(scheme: HotSpotScheme, stresses: number[], t?: num
       terms.push(numTerm(`x${i + 1}`, (p * t) / MM, 'mm'));
     });
   }
-  const value = def.coefficients.reduce((sum, c, i) => sum + c * stresses[i], 0);
+  const extrapolated = def.coefficients.reduce((sum, c, i) => sum + c * stresses[i], 0);
   const notes: MethodNote[] = [];
   const nearest = stresses[0];
   if (
     Math.abs(nearest) > 0 &&
-    Math.abs(value) < Math.abs(nearest) * 0.999 &&
-    Math.sign(value) === Math.sign(nearest)
-  )
+    Math.abs(extrapolated) < Math.abs(nearest) * 0.999 &&
+    Math.sign(extrapolated) === Math.sign(nearest)
+  ) {
+    // Never below what was read nearest the toe: the larger of the two is taken (common
+    // practice, no source), so that a reversed gradient cannot lower the stress at the detail.
     notes.push({
       code: 'hot-spot-gradient',
       severity: 'warning',
       message:
-        'The surface stress grows away from the toe: the extrapolated hot-spot stress is below the stress at the first point; check the points, their order and the mesh.',
+        "The surface stress grows away from the toe: the extrapolated hot-spot stress is below the stress at the first point, so the first point's stress is taken; check the points, their order and the mesh.",
     });
-  return computed(value, def.formula, HOT_SPOT_SOURCE, terms, notes);
+    return computed(
+      nearest,
+      `${def.formula}; not below sigma at the first point`,
+      HOT_SPOT_SOURCE,
+      [...terms, mpaTerm('extrapolated', extrapolated)],
+      notes,
+    );
+  }
+  return computed(extrapolated, def.formula, HOT_SPOT_SOURCE, terms, notes);
 }
 
 function positionsText(def: SchemeDef): string {
