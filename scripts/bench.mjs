@@ -20,7 +20,25 @@ await build({
   outfile: out,
   logLevel: 'error',
 });
-for (const r of JSON.parse(execFileSync(process.execPath, [out], { encoding: 'utf8' }))) add('core', r);
+const coreRows = JSON.parse(execFileSync(process.execPath, [out], { encoding: 'utf8' }));
+for (const r of coreRows) add('core', r);
+// Peer of the per-check figure: the same stress-life check with pint quantities (Debian's
+// python3-pint, in the system Python); "peer not installed" when it is missing.
+{
+  const ours = coreRows.find((r) => r.figure === 'evaluation per check (beyond Markdown)')?.value;
+  const py = ['/usr/bin/python3', 'python3'].find((p) => spawnSync(p, ['-c', 'import pint']).status === 0);
+  const r = py ? spawnSync(py, ['scripts/bench/pint_peer.py', '200'], { encoding: 'utf8' }) : undefined;
+  const ms = r && r.status === 0 ? Number(r.stdout.trim()) : Number.NaN;
+  if (Number.isFinite(ms)) {
+    add('core', { figure: 'peer: Python + pint, same check', value: ms, unit: 'ms/check' });
+    add('core', {
+      figure: 'peer per check / ours per check',
+      value: ms / ours,
+      unit: 'x',
+      goal: `>= 10x: ${ms / ours >= 10 ? 'met' : `not met (${(10 / (ms / ours)).toFixed(1)}x short)`}`,
+    });
+  } else add('core', { figure: 'peer: Python + pint: peer not installed', value: Number.NaN, unit: '' });
+}
 
 // Other sections write JSON rows on their last stdout line, when their scripts exist.
 for (const [section, script, args] of [

@@ -81,7 +81,7 @@ class KeptCycles {
   }
 }
 
-function grow(a: Float64Array, n: number): Float64Array {
+function grow(a: Float64Array, n: number): Float64Array<ArrayBuffer> {
   const b = new Float64Array(n);
   b.set(a);
   return b;
