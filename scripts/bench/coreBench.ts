@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { all, create } from 'mathjs';
 import { type BlockSource, evaluateNote, findFatigueBlocks } from '../../shared-core/src';
-import { BlockSequence } from '../../shared-core/src/language/noteLoop';
+import { BlockSequence } from '../../shared-core/src/note/noteLoop';
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
