@@ -1,6 +1,6 @@
 // `npm run bench`: one table of every figure the project tracks, each beside its goal or
-// peer. Sections: core evaluation, language server, rainflow counting, hardening (10 MB note,
-// edit storm), bundle sizes.
+// peer. Sections: core evaluation, start-up, extension bundle load, language server, rainflow
+// counting, hardening (10 MB note, edit storm), bundle sizes.
 import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readdirSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -43,6 +43,7 @@ for (const r of coreRows) add('core', r);
 // Other sections write JSON rows on their last stdout line, when their scripts exist.
 for (const [section, script, args] of [
   ['startup', 'scripts/bench-startup.mjs', ['--json']],
+  ['extension', 'scripts/bench-extension.mjs', ['--json']],
   ['server', 'scripts/bench-lsp.mjs', ['--json']],
   ['rainflow', 'scripts/bench-rainflow.mjs', ['--json']],
   ['hardening', 'scripts/bench-hardening.mjs', ['--json']],

@@ -1,14 +1,18 @@
 /**
  * Markdown preview: under each ```fatigue block, a table of the check's main results, its
- * requirements and its status. The note is evaluated by the core in-process (it is pure);
- * load-history files are not read here, so a damage check driven by a history says so.
+ * requirements and its status, as the language server evaluated them for this very version
+ * of the note (the `fatigue/summary` records the panel shows, history files included).
+ * Nothing is evaluated here: until the server's results for the note's current version are
+ * at hand, each block says "evaluating…", and the preview is refreshed when they arrive.
  */
-import { type CheckResult, evaluateNote, methodViews } from '@fatigue-notes/core';
+import { problemCounts, type SummaryCheck } from './summary';
 
 /** The parts of markdown-it this plugin uses (the preview passes its own instance). */
 export interface MarkdownItLike {
   core: {
-    ruler: { push(name: string, rule: (state: { src: string; tokens: Token[] }) => void): void };
+    ruler: {
+      push(name: string, rule: (state: { src: string; tokens: Token[]; env?: unknown }) => void): void;
+    };
   };
   renderer: { rules: Record<string, RenderRule | undefined> };
   utils: { escapeHtml(s: string): string };
@@ -31,57 +35,88 @@ type RenderRule = (
 
 export interface PreviewSettings {
   enabled: boolean;
-  unitSystem: 'auto' | 'SI' | 'US';
-  significantDigits: number;
-  lints?: Record<string, boolean>;
 }
 
-const META_KEY = 'fatigueNotesResults';
-const STATUS: Record<CheckResult['status'], string> = {
+/** The server's results for the note being rendered, if it has them for its current version. */
+export type PreviewResults =
+  | { state: 'ready'; checks: readonly SummaryCheck[] }
+  | { state: 'evaluating' }
+  | { state: 'unavailable'; message: string };
+
+/** The fence's place among the note's fatigue fences, set when the note is parsed. */
+const INDEX_KEY = 'fatigueNotesIndex';
+const STATUS: Record<SummaryCheck['status'], string> = {
   pass: '✓ pass',
   fail: '✗ fail',
   error: '! error',
-  unchecked: '– unchecked',
+  unchecked: '– no requirement',
 };
 
 function isFatigueFence(info: string): boolean {
   return /^fatigue(\s|$)/.test(info.trim());
 }
 
-export function fatiguePreviewPlugin(md: MarkdownItLike, settings: () => PreviewSettings): MarkdownItLike {
-  // The results travel on the fence tokens themselves: VS Code parses with one `env` and
-  // renders (possibly from its token cache) with another.
-  md.core.ruler.push('fatigue_notes_evaluate', (state) => {
-    const s = settings();
-    if (!s.enabled) return;
-    const fences = state.tokens.filter((t) => t.type === 'fence' && isFatigueFence(t.info));
-    if (fences.length === 0) return;
-    const result = evaluateNote(state.src, {
-      unitSystem: s.unitSystem,
-      significantDigits: s.significantDigits,
-      ...(s.lints ? { lints: s.lints } : {}),
-    });
-    fences.forEach((token, n) => {
-      // The n-th fatigue fence of the note is the n-th check; the opening line confirms it.
-      const line = token.map?.[0];
-      const check = result.checks.find((c) => c.range.start.line === line) ?? result.checks[n];
-      if (check) token.meta = { ...(token.meta ?? {}), [META_KEY]: renderCheck(check, md.utils.escapeHtml) };
-    });
+/** The preview's own document (VS Code passes it as `env.currentDocument`, a Uri). */
+export function documentUriOf(env: unknown): string | undefined {
+  const doc = (env as { currentDocument?: unknown } | undefined)?.currentDocument;
+  if (doc === undefined || doc === null) return undefined;
+  const s = typeof doc === 'string' ? doc : String(doc);
+  return s && s !== '[object Object]' ? s : undefined;
+}
+
+export function fatiguePreviewPlugin(
+  md: MarkdownItLike,
+  settings: () => PreviewSettings,
+  results: (uri: string | undefined) => PreviewResults,
+): MarkdownItLike {
+  // VS Code parses without the document (and caches the tokens) and renders with it in
+  // `env.currentDocument`: the parse only numbers the fatigue fences, the render looks the
+  // results up, once per render.
+  md.core.ruler.push('fatigue_notes_fences', (state) => {
+    let n = 0;
+    for (const t of state.tokens)
+      if (t.type === 'fence' && isFatigueFence(t.info)) t.meta = { ...(t.meta ?? {}), [INDEX_KEY]: n++ };
   });
+  const perRender = new WeakMap<object, PreviewResults>();
+  const lookup = (env: unknown): PreviewResults => {
+    if (typeof env !== 'object' || env === null) return results(documentUriOf(env));
+    let r = perRender.get(env);
+    if (!r) {
+      r = results(documentUriOf(env));
+      perRender.set(env, r);
+    }
+    return r;
+  };
   const fallback: RenderRule = (tokens, idx, options, _env, self) =>
     (self as { renderToken(t: Token[], i: number, o: unknown): string }).renderToken(tokens, idx, options);
   const original = md.renderer.rules.fence ?? fallback;
   md.renderer.rules.fence = (tokens, idx, options, env, self) => {
     const html = original(tokens, idx, options, env, self);
-    const extra = tokens[idx].meta?.[META_KEY];
-    return typeof extra === 'string' && settings().enabled ? html + extra : html;
+    const token = tokens[idx];
+    const n = token.meta?.[INDEX_KEY];
+    if (typeof n !== 'number' || !settings().enabled) return html;
+    const r = lookup(env);
+    if (r.state === 'evaluating') return html + renderWaiting();
+    if (r.state === 'unavailable') return html + renderUnavailable(r.message, md.utils.escapeHtml);
+    // The check whose block opens on this fence's line; the n-th check otherwise.
+    const line = token.map?.[0];
+    const check = r.checks.find((c) => c.range.start.line === line) ?? r.checks[n];
+    return check ? html + renderCheck(check, md.utils.escapeHtml) : html;
   };
   return md;
 }
 
-export function renderCheck(c: CheckResult, esc: (s: string) => string): string {
-  const rows = methodViews(c.method)
-    .preview.filter((n) => c.values[n])
+export function renderWaiting(): string {
+  return '<div class="fatigue-notes-result fatigue-notes-evaluating" role="status"><span class="fatigue-notes-badge">evaluating…</span> the language server is working out this check</div>';
+}
+
+export function renderUnavailable(message: string, esc: (s: string) => string): string {
+  return `<div class="fatigue-notes-result fatigue-notes-unavailable" role="status">${esc(message)}</div>`;
+}
+
+export function renderCheck(c: SummaryCheck, esc: (s: string) => string): string {
+  const rows = (c.shown?.table ?? [])
+    .filter((n) => c.values[n])
     .map((n) => {
       const v = c.values[n];
       return `<tr><th scope="row"><code>${esc(n)}</code></th><td class="fatigue-notes-num">${esc(v.display)}</td><td>${esc(v.meaning)}</td></tr>`;
@@ -89,14 +124,15 @@ export function renderCheck(c: CheckResult, esc: (s: string) => string): string 
   const reqs = c.requirements.map((r) => {
     const mark = r.met === true ? '✓' : r.met === false ? '✗' : '?';
     const cls = r.met === true ? 'met' : r.met === false ? 'not-met' : 'unknown';
-    return `<li class="fatigue-notes-req-${cls}">${mark} <code>${esc(r.text)}</code>: ${esc(r.actualDisplay)}</li>`;
+    const verdict = r.met === true ? 'met' : r.met === false ? 'not met' : 'not evaluated';
+    return `<li class="fatigue-notes-req-${cls}">${mark} <code>${esc(r.text)}</code>: ${esc(r.actualDisplay)} (${verdict})</li>`;
   });
-  const errors = c.diagnostics.filter((d) => d.severity === 'error');
-  const warnings = c.diagnostics.filter((d) => d.severity === 'warning');
+  const { errors, warnings } = problemCounts(c);
+  const first = c.diagnostics?.firstError;
   const problems =
-    errors.length + warnings.length > 0
-      ? `<p class="fatigue-notes-problems">${errors.length} error${errors.length === 1 ? '' : 's'}, ${warnings.length} warning${warnings.length === 1 ? '' : 's'}${
-          errors[0] ? `: ${esc(errors[0].message)}` : ''
+    errors + warnings > 0
+      ? `<p class="fatigue-notes-problems">${errors} error${errors === 1 ? '' : 's'}, ${warnings} warning${warnings === 1 ? '' : 's'}${
+          first ? `: ${esc(first)}` : ''
         }</p>`
       : '';
   return (

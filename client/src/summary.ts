@@ -1,9 +1,11 @@
 /**
  * The `fatigue/summary` request of the fatigue-notes language server: every check of one
  * note, as the core's `CheckResult` records (without their diagnostics, which the editor
- * already shows). The client presents these records; it never recomputes a number.
+ * already shows), with the names each view shows and the diagrams drawn. The client
+ * presents these records; it never recomputes a number, and holds no copy of the core
+ * (types only are imported from it).
  */
-import type { CheckResult } from '@fatigue-notes/core';
+import type { CheckDiagram, CheckResult } from '@fatigue-notes/core';
 
 export const SUMMARY_REQUEST = 'fatigue/summary';
 
@@ -11,24 +13,26 @@ export interface SummaryParams {
   uri: string;
 }
 
-/** A check's record; the server adds the counts of its diagnostics. */
+/** A check's record; the server adds what each view shows, the diagrams and the counts of its diagnostics. */
 export type SummaryCheck = Omit<CheckResult, 'diagnostics' | 'insertLine'> & {
-  diagnostics?: { errors: number; warnings: number } | CheckResult['diagnostics'];
+  diagnostics?: { errors: number; warnings: number; firstError?: string };
+  /** The names of `values` each view shows (the core's one list, sent by the server). */
+  shown?: { headline: string[]; table: string[]; life: string | null };
+  /** The check's diagrams as SVG text, drawn by the server. */
+  diagrams?: CheckDiagram[];
 };
 
-/** Errors and warnings of a check, from the server's counts or from the core's list. */
+/** Errors and warnings of a check, from the server's counts. */
 export function problemCounts(c: SummaryCheck): { errors: number; warnings: number } {
   const d = c.diagnostics;
   if (!d) return { errors: 0, warnings: 0 };
-  if (Array.isArray(d))
-    return {
-      errors: d.filter((x) => x.severity === 'error').length,
-      warnings: d.filter((x) => x.severity === 'warning').length,
-    };
   return { errors: Number(d.errors) || 0, warnings: Number(d.warnings) || 0 };
 }
 
 export interface SummaryResult {
+  /** The note and the version of it these results are of. */
+  uri?: string;
+  version?: number;
   checks: SummaryCheck[];
 }
 

@@ -1,7 +1,8 @@
 /**
  * Keeps the summary of the note the engineer is looking at: follows the active Markdown
- * editor, asks the language server for `fatigue/summary` when the note is opened and again
- * once typing has stopped, and tells the panel and the status bar.
+ * editor, asks the language server for `fatigue/summary` as soon as the note is opened (no
+ * debounce) and again once typing has paused, and tells the panel, the status bar and the
+ * preview.
  */
 import * as vscode from 'vscode';
 import { SECTION } from './settings';
@@ -13,6 +14,8 @@ export const TYPING_PAUSE_MS = 60;
 export interface SummaryState {
   /** The note shown, or undefined when no Markdown note has been opened yet. */
   document?: { uri: vscode.Uri; fileName: string; version: number };
+  /** The version of the note the server's results are of (absent until they arrive). */
+  version?: number;
   checks: SummaryCheck[];
   /** Why there are no results (server not running, request failed). */
   error?: string;
@@ -61,18 +64,24 @@ export class SummaryService implements vscode.Disposable {
     return this.doc;
   }
 
-  /** Show this note (also used when the panel opens on a note that is not active). */
+  /** Show this note (also used when the panel opens on a note that is not active): asks at once. */
   follow(doc: vscode.TextDocument): void {
     if (this.doc !== doc) {
       this.doc = doc;
       this.state = { document: describe(doc), checks: [] };
     }
-    this.schedule(0);
+    this.now();
   }
 
   /** Ask again now (the server restarted, the panel opened ...). */
   refresh(): void {
-    this.schedule(0);
+    this.now();
+  }
+
+  private now(): void {
+    if (this.timer) clearTimeout(this.timer);
+    this.timer = undefined;
+    void this.fetch();
   }
 
   private schedule(ms: number): void {
@@ -102,7 +111,9 @@ export class SummaryService implements vscode.Disposable {
     try {
       const result = await send({ uri: doc.uri.toString() });
       if (seq !== this.sequence) return; // a newer request is on its way
-      this.publish({ document: describe(doc), checks: Array.isArray(result?.checks) ? result.checks : [] });
+      const checks = Array.isArray(result?.checks) ? result.checks : [];
+      const version = typeof result?.version === 'number' ? result.version : undefined;
+      this.publish({ document: describe(doc), checks, ...(version !== undefined ? { version } : {}) });
     } catch (e) {
       if (seq !== this.sequence) return;
       const msg = e instanceof Error ? e.message : String(e);

@@ -1,22 +1,24 @@
 /**
- * The summary panel's page in headless Chromium (the npm package's, through playwright-core), fed
- * with the model built from `evaluateNote` results exactly as the extension builds it from
- * the server's summary: rows, sorting, diagrams, the messages it posts, keyboard use, the
- * empty state, the content security policy and the theme colours.
+ * The summary panel's page in headless Chromium (the npm package's, through playwright-core),
+ * fed with the model the extension builds from the server's summary (made by the server's
+ * own function from `evaluateNote` results, diagrams drawn): rows, sorting, diagrams, the
+ * messages it posts, keyboard use, the empty state, the content security policy and the
+ * theme colours.
  */
 import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { evaluateNote } from '@fatigue-notes/core';
+import { DIAGRAM_STYLE } from '@fatigue-notes/core';
 import { build } from 'esbuild';
 import { type Browser, chromium, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CONTRACT_BLOCK } from '../../test/fixtures/contractBlock';
 import { testBrowser } from '../../test/helpers/browser.mjs';
-import { panelHtml } from '../src/panel/html';
+import { DIAGRAM_STYLE_FILE, panelHtml } from '../src/panel/html';
 import { buildPanelModel } from '../src/panel/model';
 import type { PanelModel } from '../src/panel/protocol';
 import type { SummaryCheck } from '../src/summary';
+import { serverSummary } from './serverSummary';
 
 const ROOT = resolve(__dirname, '../..');
 const OUT = join(ROOT, 'test-output');
@@ -47,14 +49,9 @@ M_min = -50 N*m
 `;
 
 function summaryChecks(text: string): SummaryCheck[] {
-  // What the server's `fatigue/summary` returns: the check records, their diagnostics counted.
-  return evaluateNote(text).checks.map(({ diagnostics, insertLine: _i, ...rest }) => ({
-    ...rest,
-    diagnostics: {
-      errors: diagnostics.filter((d) => d.severity === 'error').length,
-      warnings: diagnostics.filter((d) => d.severity === 'warning').length,
-    },
-  }));
+  // What the server's `fatigue/summary` returns: the check records with their diagrams drawn
+  // and their diagnostics counted, built by the server's own function.
+  return serverSummary(text);
 }
 
 describe('summary panel in Chromium', () => {
@@ -88,10 +85,18 @@ describe('summary panel in Chromium', () => {
       logLevel: 'error',
     });
     writeFileSync(join(dir, 'panel.css'), readFileSync(join(ROOT, 'client/media/panel.css')));
+    // The diagrams' stylesheet the build writes into dist/ from the core.
+    writeFileSync(join(dir, DIAGRAM_STYLE_FILE), DIAGRAM_STYLE);
     const nonce = 'TestNonce0123456789abcdefABCDEF0';
     writeFileSync(
       join(dir, 'panel.html'),
-      panelHtml({ cspSource: 'file:', nonce, scriptUri: 'panel.js', styleUri: 'panel.css' }),
+      panelHtml({
+        cspSource: 'file:',
+        nonce,
+        scriptUri: 'panel.js',
+        styleUri: 'panel.css',
+        diagramStyleUri: DIAGRAM_STYLE_FILE,
+      }),
     );
     const { executablePath, args } = await testBrowser();
     browser = await chromium.launch({ executablePath, args });
@@ -267,6 +272,18 @@ describe('summary panel in Chromium', () => {
     expect(await page.locator('#empty').textContent()).toContain('No fatigue checks in this note');
     await post(buildPanelModel({ fileName: 'x.md' }, [], 'The language server did not answer'));
     expect(await page.locator('#empty').textContent()).toContain('did not answer');
+  });
+
+  it('selects the check the extension names (the line above a block was clicked)', async () => {
+    await page.evaluate(
+      (mm) => window.postMessage({ type: 'model', model: mm, select: 'axle_stub' }, '*'),
+      model as unknown as object,
+    );
+    await page.waitForFunction(
+      () =>
+        document.querySelector('#rows tr[aria-selected="true"]')?.getAttribute('data-key') === 'axle_stub',
+    );
+    expect(await page.locator('#detail h2').textContent()).toContain('axle_stub');
   });
 
   it('runs under its content security policy without a violation', () => {

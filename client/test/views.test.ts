@@ -5,13 +5,15 @@
  */
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { evaluateNote } from '@fatigue-notes/core';
+import { checkDiagrams, evaluateNote } from '@fatigue-notes/core';
 import { describe, expect, it } from 'vitest';
-import { buildPanelModel, buildRows } from '../src/panel/model';
+import { templateChoices, templateSnippetFor } from '../../server/src/lsp/templates';
+import { buildDetail, buildPanelModel, buildRows } from '../src/panel/model';
 import { fatiguePreviewPlugin, type MarkdownItLike, type Token } from '../src/preview';
 import { statusText } from '../src/statusText';
 import { worstSafetyFactor } from '../src/summary';
-import { freshId, TEMPLATE_CHOICES, templateSnippet } from '../src/templates';
+import { freshId } from '../src/templates';
+import { serverSummary } from './serverSummary';
 
 const ROOT = resolve(__dirname, '../..');
 const CONTRACT = readFileSync(resolve(ROOT, 'test/fixtures/contract-example.md'), 'utf8');
@@ -29,11 +31,49 @@ require: n_f >= 2
 \`\`\`
 `;
 
+const DAMAGE = `
+\`\`\`fatigue hoist_spectrum
+method: damage
+Sut = 600 MPa
+Sy = 450 MPa
+surface: machined
+d = 30 mm
+feature: none
+criterion: goodman
+spectrum: sigma_a = 300 MPa, sigma_m = 100 MPa, n = 2000
+spectrum: sigma_a = 250 MPa, n = 1e4
+\`\`\`
+`;
+const CRACK = `
+\`\`\`fatigue seam
+method: crack-growth
+C_paris = 6.9e-12
+m_paris = 3.0
+a_i = 1 mm
+K_IC = 100 MPa*m^0.5
+Y = 1.12
+sigma_max = 200 MPa
+sigma_min = 20 MPa
+\`\`\`
+`;
+/** A stated Kt without a notch feature: the tool's own value is Kt = 1, and it says why. */
+const STATED_KT = `
+\`\`\`fatigue stated_kt
+Sut = 600 MPa
+Sy = 400 MPa
+d = 30 mm
+Kt = 1.85
+M_max = 100 N*m
+M_min = -100 N*m
+\`\`\`
+`;
+
 describe('panel model', () => {
   const checks = evaluateNote(CONTRACT + FAILING).checks;
+  const summary = serverSummary(CONTRACT + FAILING);
 
   it('shows each check with its own displays and numeric sort keys', () => {
-    const rows = buildRows(checks);
+    const rows = buildRows(summary);
     expect(rows.map((r) => r.id)).toEqual(['drive_shaft_fillet', 'lever_arm']);
     expect(rows[0].n_f).toEqual({ text: checks[0].values.n_f.display, sort: checks[0].values.n_f.si });
     // Infinite life sorts after every finite life.
@@ -42,10 +82,12 @@ describe('panel model', () => {
     expect(rows[0].line).toBe(3);
   });
 
-  it('gives every check its diagrams without an embedded style (the page supplies it under its CSP)', () => {
-    const m = buildPanelModel({ fileName: 'a.md' }, checks);
+  it('shows the diagrams the server drew, without an embedded style (the page supplies it under its CSP)', () => {
+    const m = buildPanelModel({ fileName: 'a.md' }, summary);
     expect(m.state).toBe('note');
     expect(m.details[0].diagrams.map((d) => d.kind)).toEqual(['haigh', 'sn']);
+    // The very SVG the core draws for this check: the panel passes it on, it draws nothing.
+    expect(m.details[0].diagrams).toEqual(checkDiagrams(checks[0], { embedStyle: false }));
     for (const d of m.details[0].diagrams) expect(d.svg).not.toContain('<style');
     expect(m.details[0].derivation.find((d) => d.name === 'n_f')?.source).toContain('Shigley');
     expect(m.details[1].requirements).toEqual([
@@ -53,16 +95,30 @@ describe('panel model', () => {
     ]);
   });
 
+  it('names the life column from the server: damage D_sum for a damage check, N_cg for crack growth', () => {
+    const damage = serverSummary(DAMAGE);
+    expect(buildRows(damage)[0].life).toMatchObject({ name: 'D_sum', text: damage[0].values.D_sum.display });
+    const crack = serverSummary(CRACK);
+    expect(buildRows(crack)[0].life).toMatchObject({ name: 'N_cg', text: crack[0].values.N_cg.display });
+  });
+
+  it('says what the tool would compute beside a stated value, in the core words', () => {
+    const s = serverSummary(STATED_KT);
+    const kt = buildDetail(s[0], 0).derivation.find((d) => d.name === 'Kt');
+    expect(kt?.tool).toBe(`${s[0].values.Kt.tool?.label} (Kt = 1)`);
+    expect(kt?.tool).toMatch(/^fit 1: no notch feature stated/);
+  });
+
   it('has a state for no note, no checks and a failed request', () => {
     expect(buildPanelModel(undefined, []).state).toBe('no-note');
     expect(buildPanelModel({ fileName: 'a.md' }, []).state).toBe('no-checks');
-    expect(buildPanelModel({ fileName: 'a.md' }, checks, 'down').state).toBe('error');
+    expect(buildPanelModel({ fileName: 'a.md' }, summary, 'down').state).toBe('error');
   });
 });
 
 describe('status bar text', () => {
   it('names the smallest safety factor and where it is', () => {
-    const checks = evaluateNote(CONTRACT + FAILING).checks;
+    const checks = serverSummary(CONTRACT + FAILING);
     const worst = worstSafetyFactor(checks)!;
     // The smallest of the n_f and n_y values the checks report.
     const all = checks
@@ -71,22 +127,25 @@ describe('status bar text', () => {
     expect(worst.value).toBe(Math.min(...all));
     expect(worst).toMatchObject({ name: 'n_f', check: 'lever_arm' });
     const t = statusText({ checks });
-    expect(t.text).toBe(`$(warning) n min ${worst.display}`);
+    expect(t.text).toBe(`$(warning) lowest safety factor ${worst.display}`);
     expect(t.alarm).toBe(true);
     expect(t.tooltip).toContain('1 pass, 1 fail');
-    expect(statusText({ checks: evaluateNote(CONTRACT).checks }).alarm).toBe(false);
+    expect(statusText({ checks: serverSummary(CONTRACT) }).alarm).toBe(false);
   });
 });
 
 /**
  * The smallest stand-in for markdown-it that exercises the plugin: fences only, parsed with
- * one env and rendered with another, as VS Code's preview does.
+ * one env (without the document) and rendered with another (holding it), as VS Code's
+ * preview does.
  */
-function fakeMarkdownIt(): MarkdownItLike & { render(src: string): string } {
-  const rules: Array<(s: { src: string; tokens: Token[] }) => void> = [];
+function fakeMarkdownIt(): MarkdownItLike & { render(src: string, uri?: string): string } {
+  const rules: Array<(s: { src: string; tokens: Token[]; env?: unknown }) => void> = [];
   const md = {
     core: {
-      ruler: { push: (_n: string, r: (s: { src: string; tokens: Token[] }) => void) => rules.push(r) },
+      ruler: {
+        push: (_n: string, r: (s: { src: string; tokens: Token[]; env?: unknown }) => void) => rules.push(r),
+      },
     },
     renderer: {
       rules: {
@@ -97,7 +156,7 @@ function fakeMarkdownIt(): MarkdownItLike & { render(src: string): string } {
       escapeHtml: (s: string) =>
         s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;'),
     },
-    render(src: string): string {
+    render(src: string, uri = 'file:///note.md'): string {
       const lines = src.split('\n');
       const tokens: Token[] = [];
       for (let i = 0; i < lines.length; i++) {
@@ -108,22 +167,45 @@ function fakeMarkdownIt(): MarkdownItLike & { render(src: string): string } {
         tokens.push({ type: 'fence', info: m[1], map: [i, j + 1], meta: null });
         i = j;
       }
-      for (const r of rules) r({ src, tokens });
-      return tokens.map((_, i) => md.renderer.rules.fence!(tokens, i, {}, { another: 'env' }, {})).join('\n');
+      // As VS Code does: the parse has no document; the render's env holds it as a Uri
+      // object, whose toString() is the URI.
+      for (const r of rules) r({ src, tokens, env: { currentDocument: undefined } });
+      const env = { currentDocument: { toString: () => uri } };
+      return tokens.map((_, i) => md.renderer.rules.fence!(tokens, i, {}, env, {})).join('\n');
     },
   };
   return md;
 }
 
 describe('Markdown preview plugin', () => {
-  it('adds each check results table and status under its block', () => {
+  const text = `${CONTRACT}\n\`\`\`js\nx\n\`\`\`\n${FAILING}`;
+
+  it("renders the server's results for the note under each block: results, requirements, status", () => {
     const md = fakeMarkdownIt();
-    fatiguePreviewPlugin(md, () => ({ enabled: true, unitSystem: 'auto', significantDigits: 4 }));
-    const html = md.render(`${CONTRACT}\n\`\`\`js\nx\n\`\`\`\n${FAILING}`);
-    const checks = evaluateNote(`${CONTRACT}\n\`\`\`js\nx\n\`\`\`\n${FAILING}`).checks;
+    const summary = serverSummary(text);
+    const asked: Array<string | undefined> = [];
+    fatiguePreviewPlugin(
+      md,
+      () => ({ enabled: true }),
+      (uri) => {
+        asked.push(uri);
+        return { state: 'ready', checks: summary };
+      },
+    );
+    const html = md.render(text);
+    expect(asked).toEqual(['file:///note.md']);
     expect(html).toContain('data-check="drive_shaft_fillet"');
     expect(html).toContain('fatigue-notes-pass');
-    expect(html).toContain(`<td class="fatigue-notes-num">${checks[0].values.n_f.display}</td>`);
+    // The rows are the ones the server names for the check, in its order, with its displays.
+    const first = html.slice(
+      html.indexOf('data-check="drive_shaft_fillet"'),
+      html.indexOf('data-check="lever_arm"'),
+    );
+    const names = [...first.matchAll(/<th scope="row"><code>([^<]+)<\/code>/g)].map((m) => m[1]);
+    expect(names).toEqual(summary[0].shown?.table);
+    expect(names.slice(0, 3)).toEqual(['n_f', 'n_y', 'N_f']);
+    for (const n of names)
+      expect(first).toContain(`<td class="fatigue-notes-num">${summary[0].values[n].display}</td>`);
     expect(html).toContain('fatigue-notes-fail');
     expect(html).toContain('✗ <code>n_f &gt;= 2</code>');
     // `D` of a stress-life check is the shoulder diameter, not a damage: not among the results.
@@ -132,13 +214,48 @@ describe('Markdown preview plugin', () => {
     expect(html).toContain('<pre data-info="js"></pre>\n<pre');
   });
 
-  it('follows the unit setting and can be switched off', () => {
+  it('says "evaluating…" under every block until the results of this version are in, and numbers none', () => {
+    const md = fakeMarkdownIt();
+    fatiguePreviewPlugin(
+      md,
+      () => ({ enabled: true }),
+      () => ({ state: 'evaluating' }),
+    );
+    const html = md.render(text);
+    expect(html.match(/evaluating…/g)).toHaveLength(2);
+    expect(html).not.toContain('fatigue-notes-num');
+    expect(html).not.toContain('<pre data-info="js"></pre><div');
+  });
+
+  it('says why when there are no results, and can be switched off', () => {
     const md = fakeMarkdownIt();
     let enabled = true;
-    fatiguePreviewPlugin(md, () => ({ enabled, unitSystem: 'US', significantDigits: 3 }));
-    expect(md.render(CONTRACT)).toMatch(/ksi<\/td>/);
+    fatiguePreviewPlugin(
+      md,
+      () => ({ enabled }),
+      () => ({ state: 'unavailable', message: 'the <server> is not running' }),
+    );
+    expect(md.render(CONTRACT)).toContain('the &lt;server&gt; is not running');
     enabled = false;
     expect(md.render(CONTRACT)).not.toContain('fatigue-notes-result');
+  });
+
+  it('shows the server units (US here) and the damage of a damage check', () => {
+    const md = fakeMarkdownIt();
+    const us = serverSummary(CONTRACT, { unitSystem: 'US' });
+    const damage = serverSummary(DAMAGE);
+    let checks = us;
+    fatiguePreviewPlugin(
+      md,
+      () => ({ enabled: true }),
+      () => ({ state: 'ready', checks }),
+    );
+    expect(md.render(CONTRACT)).toMatch(/ksi<\/td>/);
+    checks = damage;
+    const html = md.render(DAMAGE);
+    expect(html).toContain(
+      `<th scope="row"><code>D_sum</code></th><td class="fatigue-notes-num">${damage[0].values.D_sum.display}</td>`,
+    );
   });
 });
 
@@ -149,11 +266,11 @@ describe('check templates', () => {
   });
 
   it('gives blocks that the core reads as the chosen method, with only placeholders to fill', () => {
-    for (const c of TEMPLATE_CHOICES) {
+    for (const c of templateChoices()) {
       for (const system of ['SI', 'US'] as const) {
         // Expand the snippet as VS Code would with its defaults: ${1:x} -> x, ${1|a,b|} -> a.
-        const text = templateSnippet(c.kind, 'x_1', system)
-          .replace(/\$\{\d+\|([^,|]+)[^}]*\}/g, '$1')
+        const text = templateSnippetFor({ kind: c.kind, id: 'x_1', system })
+          .snippet.replace(/\$\{\d+\|([^,|]+)[^}]*\}/g, '$1')
           .replace(/\$\{\d+:([^}]*)\}/g, '$1')
           .replace(/\$0/, '');
         const r = evaluateNote(text);

@@ -3,6 +3,7 @@ import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
+import { methods } from '@fatigue-notes/core';
 import Ajv from 'ajv';
 import { beforeAll, describe, expect, it } from 'vitest';
 
@@ -68,6 +69,9 @@ describe('fatigue-notes check', () => {
       const out = JSON.parse(r.stdout);
       expect(validate(out), JSON.stringify(validate.errors)).toBe(true);
     }
+    // The schema names no method: every registered method's name fits its pattern.
+    const pattern = new RegExp(schema.definitions.check.properties.method.pattern);
+    for (const m of methods()) expect(m.name).toMatch(pattern);
   });
   it('JSON carries the contract fields: SI values, infinite lives, 1-based positions', () => {
     const out = JSON.parse(run(['check', 'test/fixtures/contract-example.md', '--format', 'json']).stdout);

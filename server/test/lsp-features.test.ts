@@ -128,6 +128,47 @@ describe('inlay hints and diagnostics', () => {
     expect(req?.label).toBe(`${c.requirements[0].met ? '✓' : '✗'} ${c.values.n_f.display}`);
   });
 
+  it("beside a stated value, names what the tool would compute and why, never a bare 'tool'", () => {
+    const text = [
+      '```fatigue stated_kt',
+      'Sut = 600 MPa',
+      'Sy = 400 MPa',
+      'd = 30 mm',
+      'Kt = 1.85',
+      'M_max = 100 N*m',
+      'M_min = -100 N*m',
+      '```',
+      '',
+      '```fatigue stated_fillet',
+      'Sut = 600 MPa',
+      'Sy = 400 MPa',
+      'feature: shoulder-fillet',
+      'd = 30 mm',
+      'D = 36 mm',
+      'r = 2 mm',
+      'Kt = 1.85',
+      'M_max = 100 N*m',
+      'M_min = -100 N*m',
+      '```',
+      '',
+    ].join('\n');
+    const v = view(text);
+    const lines = text.split('\n');
+    const hints = inlayHintsFor(v, {
+      start: { line: 0, character: 0 },
+      end: { line: lines.length, character: 0 },
+    });
+    const at = (n: number) => hints.filter((h) => h.position.line === n).map((h) => String(h.label));
+    const [plain, fillet] = lines.flatMap((l, i) => (l === 'Kt = 1.85' ? [i] : []));
+    // No stress raiser stated: Kt = 1 by definition of the elastic stress concentration.
+    expect(at(plain)).toEqual([
+      `fit 1: no notch feature stated · Kf ${v.result.checks[0].values.Kf.display}`,
+    ]);
+    const tool = v.result.checks[1].values.Kt.tool!;
+    expect(at(fillet)[0].split(' · ')[0]).toBe(`fit ${tool.display} from D = 36 mm, d = 30 mm, r = 2 mm`);
+    for (const h of hints) expect(String(h.label)).not.toMatch(/\btool\b/);
+  });
+
   it('adds the no-requirement hint only when the default factor is set', () => {
     const v = view();
     expect(diagnosticsOf(v).some((d) => d.code === 'no-requirement')).toBe(false);

@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { evaluateNote } from '@fatigue-notes/core';
+import { checkDiagrams, evaluateNote, shownNames } from '@fatigue-notes/core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type {
   CodeAction,
@@ -263,14 +263,27 @@ describe('language server over stdio', () => {
     expect(conv.map((a) => a.title)).toContain("Convert to 620.528 MPa (the check's SI units)");
   });
 
-  it('answers fatigue/summary with every check record', async () => {
+  it('answers fatigue/summary with every check record, its diagrams drawn and the names each view shows', async () => {
     const s = await req<{
-      checks: Array<{ id: string; status: string; values: Record<string, { si: number }>; haigh?: unknown }>;
+      version: number;
+      checks: Array<{
+        id: string;
+        status: string;
+        values: Record<string, { si: number }>;
+        haigh?: unknown;
+        diagrams: Array<{ kind: string; title: string; svg: string }>;
+        shown: { headline: string[]; table: string[]; life: string | null };
+      }>;
     }>('fatigue/summary', { uri: URI });
     const r = evaluateNote(TEXT);
     expect(s.checks.map((c) => [c.id, c.status])).toEqual(r.checks.map((c) => [c.id, c.status]));
     expect(s.checks[0].values.n_f.si).toBe(r.checks[0].values.n_f.si);
     expect(s.checks[0].haigh).toEqual(r.checks[0].haigh);
+    // The client draws nothing: the SVG of every diagram comes with the summary.
+    for (const [i, c] of s.checks.entries())
+      expect(c.diagrams).toEqual(checkDiagrams(r.checks[i], { embedStyle: false, digits: 4 }));
+    expect(s.checks[0].diagrams.map((d) => d.kind)).toEqual(['haigh', 'sn']);
+    expect(s.checks[0].shown).toEqual(shownNames(r.checks[0]));
   });
 
   it('takes settings: US display units and the default required safety factor', async () => {

@@ -1,5 +1,17 @@
 /** Public surface of the fatigue-notes core. Pure: no editor, no file system, no console. */
 export * from './computed';
+export type { HistoryChunkReader } from './context/checkContext';
+export * from './context/types';
+export {
+  editDistance,
+  INPUT_NAMES,
+  nameInfo,
+  nearest,
+  OPTIONS,
+  optionInfo,
+  RESULT_NAMES,
+  wordOwners,
+} from './context/vocabulary';
 export {
   centreCrackFiniteWidth,
   constantGeometry,
@@ -32,14 +44,11 @@ export {
 } from './damage';
 export * from './design';
 export * from './diagrams';
-export type { HistoryChunkReader } from './language/checkContext';
 export type { EvaluateOptions } from './language/checkScope';
 export { compileExpression, ExpressionError, evaluateExpression } from './language/expressions';
-export { headlineValues } from './language/headline';
+export { headlineRank, headlineValues, shownNames } from './language/headline';
 export { type BlockSource, findFatigueBlocks, splitLines } from './language/markdownBlocks';
 export { parseLine, parseStatements, type Statement } from './language/statements';
-export * from './language/types';
-export { editDistance, INPUT_NAMES, nameInfo, nearest, OPTIONS, RESULT_NAMES } from './language/vocabulary';
 export { findMaterial, MATERIALS } from './materials';
 export { type CrackGrowthMarks, crackGrowthDiagram } from './methods/crack-growth/diagram';
 export {

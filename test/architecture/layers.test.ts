@@ -29,6 +29,32 @@ describe('layers of the core', () => {
     expect(importCircles(graph)).toEqual([]);
   });
 
+  it('keeps the check context, the shared steps, the methods, the criteria and the diagrams below the language', () => {
+    // Folders below the block language and the folders above them that they may not import.
+    const below = ['context', 'checks', 'methods', 'criteria', 'diagrams'];
+    const above = ['language', 'note', 'design', 'session', 'review'];
+    const top = (p: string) => p.split('/')[0];
+    const offenders = (graph: Map<string, string[]>) =>
+      [...graph].flatMap(([from, tos]) =>
+        below.includes(top(from))
+          ? tos.filter((to) => above.includes(top(to))).map((to) => `${from} -> ${to}`)
+          : [],
+      );
+    // The reader finds an import that runs upwards where there is one.
+    expect(offenders(new Map([['checks/x.ts', ['language/types.ts', 'units/format.ts']]]))).toEqual([
+      'checks/x.ts -> language/types.ts',
+    ]);
+    expect(offenders(importGraph())).toEqual([]);
+    // The context is the interface a method is written against: it imports no method or shared step.
+    const context = [...importGraph()].filter(([from]) => top(from) === 'context');
+    expect(context.length).toBeGreaterThanOrEqual(4);
+    for (const [from, tos] of context)
+      expect(
+        tos.filter((to) => ['checks', 'methods'].includes(top(to))),
+        from,
+      ).toEqual([]);
+  });
+
   it('names a method only in its own folder (and in tests)', () => {
     const names = methods().map((m) => m.name);
     expect(names.length).toBeGreaterThanOrEqual(3);

@@ -113,7 +113,7 @@ describe('damage of a spectrum, Miner sums checked by hand', () => {
     const { c } = evaluate([...SECTION, ...levels]);
     expect(c.status).toBe('unchecked');
     expect(rel(si(c, 'Se'), Se * MPA)).toBeLessThan(1e-12);
-    expect(rel(si(c, 'D'), d1 + d2)).toBeLessThan(1e-9);
+    expect(rel(si(c, 'D_sum'), d1 + d2)).toBeLessThan(1e-9);
     expect(rel(si(c, 'repeats'), 1 / (d1 + d2))).toBeLessThan(1e-9);
     // N_eq: the cycles at the largest level (360 MPa) that do the same damage.
     expect(rel(si(c, 'N_eq'), (d1 + d2) * life(360))).toBeLessThan(1e-9);
@@ -124,21 +124,21 @@ describe('damage of a spectrum, Miner sums checked by hand', () => {
     expect(c.sn?.points[2].N).toBeNull();
     // D's derivation lists the largest contributor first: level 1 does most of the damage here.
     expect(d1).toBeGreaterThan(d2);
-    expect(c.values.D.notes?.join(' ')).toMatch(/largest contributors: sigma_ar 360 MPa/);
-    expect(c.values.D.assumption).toMatch(/original/);
+    expect(c.values.D_sum.notes?.join(' ')).toMatch(/largest contributors: sigma_ar 360 MPa/);
+    expect(c.values.D_sum.assumption).toMatch(/original/);
     expectAllFinite(c);
   });
 
   it('elementary rule: the S-N line continued below Se adds n3/N3 (Haibach, Betriebsfestigkeit, 3rd ed., "Miner elementar", as in the core; hand sum)', () => {
     const { c } = evaluate([...SECTION, 'miner: elementary', ...levels]);
-    expect(rel(si(c, 'D'), d1 + d2 + 1e6 / life(150))).toBeLessThan(1e-9);
+    expect(rel(si(c, 'D_sum'), d1 + d2 + 1e6 / life(150))).toBeLessThan(1e-9);
   });
 
   it('Haibach rule: below the knee N = N2 (Se/S)^(2k-1), k = -1/b (Haibach, Betriebsfestigkeit, 3rd ed. 2006, eq. 3.21-61; hand sum)', () => {
     const { c } = evaluate([...SECTION, 'miner: haibach', ...levels]);
     const k = -1 / b;
     const N3 = 1e6 * (Se / 150) ** (2 * k - 1);
-    expect(rel(si(c, 'D'), d1 + d2 + 1e6 / N3)).toBeLessThan(1e-9);
+    expect(rel(si(c, 'D_sum'), d1 + d2 + 1e6 / N3)).toBeLessThan(1e-9);
   });
 
   it('a moment spectrum goes through the section: sigma = 32 M / (pi d^3), times Kf (Shigley 10th ed. Sec. 3-10; exact beam theory)', () => {
@@ -155,7 +155,7 @@ describe('damage of a spectrum, Miner sums checked by hand', () => {
     // reversed at every fibre (Shigley 10th ed., Sec. 6-14, Ex. 7-1). The second level:
     // amplitude (500 + 300)/2 = 400, mean (500 - 300)/2 = 100, largest moment 500.
     const D = 5000 / life(goodman(s(550), 0)) + 800 / life(goodman(s(500), 0));
-    expect(rel(si(c, 'D'), D)).toBeLessThan(1e-9);
+    expect(rel(si(c, 'D_sum'), D)).toBeLessThan(1e-9);
     expectAllFinite(c);
   });
 });
@@ -194,7 +194,7 @@ describe('damage of a history: the ASTM E1049 example as a logger file', () => {
     expect(c.diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
     let D = 0;
     for (const [range, mean, count] of ASTM_FIG6_CYCLES) D += count / life(goodman(25 * range, 50 * mean));
-    expect(rel(si(c, 'D'), D)).toBeLessThan(1e-9);
+    expect(rel(si(c, 'D_sum'), D)).toBeLessThan(1e-9);
     expect(si(c, 'cycles_counted')).toBe(4);
     // The largest cycle: range 9, mean 0.5 -> 225 / (1 - 25/600).
     expect(rel(si(c, 'sigma_ar_max'), goodman(225, 25) * MPA)).toBeLessThan(1e-9);
@@ -227,7 +227,7 @@ describe('damage of a history: the ASTM E1049 example as a logger file', () => {
       if (s >= Se) D += count / life(s);
     }
     expect(goodman(150, 50)).toBeLessThan(Se);
-    expect(rel(si(c, 'D'), D)).toBeLessThan(1e-9);
+    expect(rel(si(c, 'D_sum'), D)).toBeLessThan(1e-9);
   });
 
   it('a bending-moment history goes through the section like M: sigma = 32 M / (pi d^3) (the same D as the stress history scaled by it)', () => {
@@ -250,7 +250,7 @@ describe('damage of a history: the ASTM E1049 example as a logger file', () => {
     let D = 0;
     for (const [range, mean, count] of ASTM_FIG6_CYCLES)
       D += count / life(goodman(25 * range + 50 * Math.abs(mean), 0));
-    expect(rel(si(c, 'D'), D)).toBeLessThan(1e-9);
+    expect(rel(si(c, 'D_sum'), D)).toBeLessThan(1e-9);
     expect(rel(si(c, 'sigma_unit'), 50 * MPA)).toBeLessThan(1e-12);
     expect(c.diagnostics.map((x) => x.code)).toContain('rotating-history');
   });
@@ -287,7 +287,7 @@ describe('damage diagnostics on their lines', () => {
     expect(d.range.start.line).toBe(lineOf(text, 'history: loads/h.csv'));
     expect(d.message).toContain('"time [s]"');
     expect(d.message).toContain('"strain"');
-    expect(c.values.D).toBeUndefined();
+    expect(c.values.D_sum).toBeUndefined();
   });
 
   it('a non-numeric row: its file line is named', () => {
@@ -303,7 +303,7 @@ describe('damage diagnostics on their lines', () => {
   it('fewer than three points', () => {
     const { c } = evaluate(historyLines, fakeReader({ 'loads/h.csv': 'stress\n1\n2\n' }));
     expect(diag(c, 'history-too-few-points').severity).toBe('error');
-    expect(c.values.D).toBeUndefined();
+    expect(c.values.D_sum).toBeUndefined();
   });
 
   it('a path out of the workspace is refused by the server reader and nothing is read', () => {
@@ -317,17 +317,73 @@ describe('damage diagnostics on their lines', () => {
       inner,
     );
     expect(diag(c, 'history-outside').range.start.line).toBe(lineOf(text, 'history: ../outside.csv'));
+    expect(c.values.D_sum).toBeUndefined();
+  });
+
+  it('D stated as a length is the larger diameter of the shoulder, as in every check; the damage is D_sum', () => {
+    // The same section and load level in a stress-life check (whose shoulder-fillet fit is
+    // checked against Peterson's charts in the concentration tests) gives the same Kt and Kf.
+    const geometry = [
+      'material-family: steel',
+      'Sut = 600 MPa',
+      'Sy = 450 MPa',
+      'surface: machined',
+      'd = 40 mm',
+      'D = 50 mm',
+      'r = 2 mm',
+      'feature: shoulder-fillet',
+    ];
+    const dmg = evaluate([
+      'method: damage',
+      ...geometry,
+      'criterion: goodman',
+      'spectrum: M_a = 1200 N*m, n = 1000',
+    ]).c;
+    const sl = evaluate([...geometry, 'M_a = 1200 N*m', 'N = 1000']).c;
+    expect(dmg.diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
+    expect(dmg.values.D.dim).toBe('length');
+    expect(dmg.values.D.si).toBeCloseTo(0.05, 12);
+    expect(dmg.values.Kt.si).toBe(sl.values.Kt.si);
+    expect(dmg.values.Kf.si).toBe(sl.values.Kf.si);
+    expect(dmg.values.D_sum.dim).toBe('one');
+    expect(dmg.values.D_sum.si).toBeGreaterThan(0);
+  });
+
+  it('the old name D of the damage still works in require:, with a renamed-result hint and its fix', () => {
+    const { c, text } = evaluate([...SECTION, 'spectrum: sigma_a = 300 MPa, n = 1000', 'require: D <= 0.5']);
+    const d = diag(c, 'renamed-result');
+    const line = lineOf(text, 'require: D');
+    expect(d.severity).toBe('hint');
+    expect(d.range.start.line).toBe(line);
+    expect(text[line].slice(d.range.start.character, d.range.end.character)).toBe('D');
+    expect(d.fixes?.[0].edits[0].newText).toBe('D_sum');
+    expect(c.requirements[0].actualDisplay).toBe(c.values.D_sum.display);
+    expect(c.requirements[0].met).toBe(c.values.D_sum.si! <= 0.5);
     expect(c.values.D).toBeUndefined();
   });
 
-  it('D stated as a length: a clear damage-name-clash error on its line', () => {
-    const { c, text } = evaluate([...SECTION, 'D = 40 mm', 'spectrum: sigma_a = 300 MPa, n = 1000']);
-    const d = diag(c, 'damage-name-clash');
-    expect(d.range.start.line).toBe(lineOf(text, 'D = 40 mm'));
-    expect(d.message).toMatch(/Kf = fillet_check\.Kf/);
-    expect(c.status).toBe('error');
-    // The damage still takes the name D (a pure number).
-    expect(c.values.D.dim).toBe('one');
+  it('another check reading the damage by its old name `id.D` gets the same value and a hint', () => {
+    const text = [
+      note([...SECTION, 'spectrum: sigma_a = 300 MPa, n = 1000'], 'dmg'),
+      '```fatigue total',
+      'method: damage',
+      ...SECTION.slice(1),
+      'spectrum: sigma_a = 300 MPa, n = 1000',
+      'D_before = dmg.D',
+      'require: D_sum <= 1 - D_before',
+      '```',
+      '',
+    ].join('\n');
+    const r = evaluateNote(text);
+    const [first, second] = r.checks;
+    const d = diag(second, 'renamed-result');
+    const lines = text.split('\n');
+    const line = lines.findIndex((l) => l.startsWith('D_before'));
+    expect(d.range.start.line).toBe(line);
+    expect(lines[line].slice(d.range.start.character, d.range.end.character)).toBe('dmg.D');
+    expect(d.fixes?.[0].edits[0].newText).toBe('dmg.D_sum');
+    expect(second.values.D_before.si).toBe(first.values.D_sum.si);
+    expect(second.requirements[0].met).toBe(first.values.D_sum.si! + second.values.D_sum.si! <= 1);
   });
 
   it('spectrum item with the wrong dimension: the error sits on that item', () => {
@@ -382,7 +438,7 @@ describe('damage diagnostics on their lines', () => {
 
   it('nothing below the knee: D = 0 and repeats infinite, not a division by zero', () => {
     const { c } = evaluate([...SECTION, 'spectrum: sigma_a = 100 MPa, n = 1e9']);
-    expect(si(c, 'D')).toBe(0);
+    expect(si(c, 'D_sum')).toBe(0);
     expect(c.values.repeats.infinite).toBe(true);
     expectAllFinite(c);
   });

@@ -89,7 +89,7 @@ describe('samples that cannot be read as finite loads are errors and withhold th
   it('the whole Fig. 6 history gives a damage (the baseline the cases below are measured against)', () => {
     const { c } = evaluate(HISTORY, fakeReader({ 'loads/h.csv': csvOf(ASTM_FIG6) }));
     expect(c.diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
-    expect(c.values.D?.si).toBeGreaterThan(0);
+    expect(c.values.D_sum?.si).toBeGreaterThan(0);
   });
 
   const cases: Array<[string, string]> = [
@@ -112,7 +112,7 @@ describe('samples that cannot be read as finite loads are errors and withhold th
       expect(errs[0].code).toBe(code);
       expect(errs[0].range.start.line).toBe(lineOf(text, 'history: loads/h.csv'));
       expect(errs[0].message).toContain('line 5');
-      expect(c.values.D).toBeUndefined();
+      expect(c.values.D_sum).toBeUndefined();
       expect(c.values.repeats).toBeUndefined();
       expect(diag(c, 'results-withheld').message).toContain('largest load');
       expect(c.status).toBe('error');
@@ -127,7 +127,7 @@ describe('samples that cannot be read as finite loads are errors and withhold th
     const d = diag(c, 'history-non-finite');
     for (const line of [5, 11, 19, 23, 32]) expect(d.message).toContain(`line ${line}:`);
     expect(d.message).toContain('(2 more)');
-    expect(c.values.D).toBeUndefined();
+    expect(c.values.D_sum).toBeUndefined();
     expect(c.requirements[0].met).toBeNull();
     expect(c.status).toBe('error');
   });
@@ -136,7 +136,7 @@ describe('samples that cannot be read as finite loads are errors and withhold th
     const { c } = evaluate(HISTORY, fakeReader({ 'loads/h.csv': `stress\n\n${ASTM_FIG6.join('\n\n')}\n\n` }));
     expect(c.diagnostics.filter((d) => d.severity !== 'information')).toEqual([]);
     expect(diag(c, 'csv-blank-rows').severity).toBe('information');
-    expect(c.values.D?.si).toBeGreaterThan(0);
+    expect(c.values.D_sum?.si).toBeGreaterThan(0);
   });
 });
 
@@ -149,7 +149,7 @@ describe('values whose ranges or stresses overflow (issue 16, item 2)', () => {
     const d = diag(c, 'history-overflow');
     expect(d.severity).toBe('error');
     expect(d.range.start.line).toBe(lineOf(text, 'history: loads/h.csv'));
-    expect(c.values.D).toBeUndefined();
+    expect(c.values.D_sum).toBeUndefined();
     expect(c.status).toBe('error');
     expectNothingNonFinite(c);
   });
@@ -160,7 +160,7 @@ describe('values whose ranges or stresses overflow (issue 16, item 2)', () => {
     const { c, text } = evaluate(lines, fakeReader({ 'loads/h.csv': csvOf(ASTM_FIG6.map((x) => x * 1000)) }));
     const d = diag(c, 'history-overflow');
     expect(d.range.start.line).toBe(lineOf(text, 'history_scale'));
-    expect(c.values.D).toBeUndefined();
+    expect(c.values.D_sum).toBeUndefined();
     expectNothingNonFinite(c);
   });
 
@@ -172,7 +172,7 @@ describe('values whose ranges or stresses overflow (issue 16, item 2)', () => {
     );
     const d = diag(c, 'absurd-value');
     expect(d.range.start.line).toBe(lineOf(text, 'history_scale'));
-    expect(c.values.D).toBeUndefined();
+    expect(c.values.D_sum).toBeUndefined();
     expect(c.status).toBe('error');
     expectNothingNonFinite(c);
   });
@@ -184,7 +184,7 @@ describe('values whose ranges or stresses overflow (issue 16, item 2)', () => {
     const { c, text } = evaluate(lines, fakeReader({ 'loads/h.csv': csvOf([1, -1, 1, -1, 1]) }));
     const d = diag(c, 'damage-overflow');
     expect(d.range.start.line).toBe(lineOf(text, 'history: loads/h.csv'));
-    expect(c.values.D).toBeUndefined();
+    expect(c.values.D_sum).toBeUndefined();
     expect(c.values.repeats).toBeUndefined();
     expectNothingNonFinite(c);
   });
@@ -208,7 +208,7 @@ describe('encodings and giant lines through a damage check (issue 16, items 3 an
     for (let i = 0; i < csv.length; i++) be[3 + 2 * i] = csv.charCodeAt(i); // ASCII: high byte 0
     const u8 = evaluate(HISTORY, fakeReader({ 'loads/h.csv': csv })).c;
     const u16 = evaluate(HISTORY, fakeReader({ 'loads/h.csv': be }, 5)).c;
-    expect(u16.values.D?.si).toBe(u8.values.D?.si);
+    expect(u16.values.D_sum?.si).toBe(u8.values.D_sum?.si);
     expect(diag(u16, 'csv-column').message).toContain('Decoded as UTF-16 BE with a byte-order mark');
   });
 
@@ -219,7 +219,7 @@ describe('encodings and giant lines through a damage check (issue 16, items 3 an
     expect(d.severity).toBe('error');
     expect(d.range.start.line).toBe(lineOf(text, 'history: loads/h.csv'));
     expect(d.message).toContain('line 2');
-    expect(c.values.D).toBeUndefined();
+    expect(c.values.D_sum).toBeUndefined();
     expectNothingNonFinite(c);
   });
 });

@@ -54,7 +54,7 @@ export class WorkspaceCheck implements vscode.Disposable {
       void vscode.window.showInformationMessage('fatigue-notes: open a folder to check every note in it.');
       return;
     }
-    await vscode.window.withProgress(
+    const summary = await vscode.window.withProgress(
       {
         location: vscode.ProgressLocation.Notification,
         title: 'fatigue-notes: checking the notes of the workspace',
@@ -94,11 +94,11 @@ export class WorkspaceCheck implements vscode.Disposable {
           try {
             json = JSON.parse(res.stdout) as CheckJson;
           } catch {
-            if (token.isCancellationRequested) return;
+            if (token.isCancellationRequested) return undefined;
             void vscode.window.showErrorMessage(
               `fatigue-notes: the checker did not answer (${firstLine(res.stderr) || `exit code ${res.code}`}).`,
             );
-            return;
+            return undefined;
           }
           for (const f of json.files ?? []) {
             const uri = vscode.Uri.file(
@@ -125,11 +125,13 @@ export class WorkspaceCheck implements vscode.Disposable {
             );
           }
         }
-        const summary = `fatigue-notes: ${checks} check${checks === 1 ? '' : 's'} in ${notesWithChecks} note${notesWithChecks === 1 ? '' : 's'}: ${failed} failed, ${errors} with errors.`;
-        const action = await vscode.window.showInformationMessage(summary, 'Show Problems');
-        if (action) await vscode.commands.executeCommand('workbench.actions.view.problems');
+        return `fatigue-notes: ${checks} check${checks === 1 ? '' : 's'} in ${notesWithChecks} note${notesWithChecks === 1 ? '' : 's'}: ${failed} failed, ${errors} with errors.`;
       },
     );
+    // The progress ends with the check; the totals stay until the engineer dismisses them.
+    if (!summary) return;
+    const action = await vscode.window.showInformationMessage(summary, 'Show Problems');
+    if (action) await vscode.commands.executeCommand('workbench.actions.view.problems');
   }
 
   dispose(): void {

@@ -1,16 +1,27 @@
 /** "Insert a new check…": pick a method, get a block with its statements to fill in. */
 import * as vscode from 'vscode';
 import { readSettings } from '../settings';
-import { freshId, TEMPLATE_CHOICES, templateSnippet } from '../templates';
+import { freshId, TEMPLATE_SNIPPET_REQUEST, TEMPLATES_REQUEST, type TemplateChoice } from '../templates';
 
-export async function insertCheck(): Promise<void> {
+export type ServerRequest = <R>(method: string, params: unknown) => Promise<R>;
+
+export async function insertCheck(send: ServerRequest): Promise<void> {
   const editor = vscode.window.activeTextEditor;
   if (editor?.document.languageId !== 'markdown') {
     void vscode.window.showInformationMessage('Open a Markdown note to insert a fatigue check into it.');
     return;
   }
+  let choices: TemplateChoice[];
+  try {
+    choices = await send<TemplateChoice[]>(TEMPLATES_REQUEST, {});
+  } catch (e) {
+    void vscode.window.showErrorMessage(
+      `The language server did not send the check templates (${e instanceof Error ? e.message : String(e)}).`,
+    );
+    return;
+  }
   const pick = await vscode.window.showQuickPick(
-    TEMPLATE_CHOICES.map((c) => ({ label: c.label, detail: c.detail, choice: c })),
+    choices.map((c) => ({ label: c.label, detail: c.detail, choice: c })),
     { title: 'Insert a new check', placeHolder: 'Which method does the check use?', matchOnDetail: true },
   );
   if (!pick) return;
@@ -26,6 +37,11 @@ export async function insertCheck(): Promise<void> {
       : ''
     : '\n\n';
   const at = line.isEmptyOrWhitespace ? line.range.start : line.range.end;
-  const snippet = new vscode.SnippetString(`${before}${templateSnippet(pick.choice.kind, id, system)}\n`);
+  const { snippet: body } = await send<{ snippet: string }>(TEMPLATE_SNIPPET_REQUEST, {
+    kind: pick.choice.kind,
+    id,
+    system,
+  });
+  const snippet = new vscode.SnippetString(`${before}${body}\n`);
   await editor.insertSnippet(snippet, at);
 }

@@ -3,8 +3,13 @@
  * only with this page's nonce or from the extension), the diagrams' stylesheet, and the
  * webview script that renders the table and details from the extension's messages.
  */
-import { DIAGRAM_STYLE } from '@fatigue-notes/core';
 import { CAUTION } from './protocol';
+
+/**
+ * The diagrams' stylesheet in `dist/`: the core's `DIAGRAM_STYLE`, written there by the build
+ * (scripts/build.mjs), so that the extension carries the style and not the core.
+ */
+export const DIAGRAM_STYLE_FILE = 'diagrams.css';
 
 export interface PanelPage {
   /** `webview.cspSource`: the origin of the extension's resources inside the webview. */
@@ -12,6 +17,8 @@ export interface PanelPage {
   nonce: string;
   scriptUri: string;
   styleUri: string;
+  /** The diagrams' stylesheet (`dist/diagrams.css`). */
+  diagramStyleUri: string;
 }
 
 export function panelHtml(p: PanelPage): string {
@@ -30,7 +37,7 @@ export function panelHtml(p: PanelPage): string {
 <meta name="viewport" content="width=device-width, initial-scale=1.0">
 <title>fatigue-notes: checks of this note</title>
 <link rel="stylesheet" href="${p.styleUri}" nonce="${p.nonce}">
-<style nonce="${p.nonce}">${DIAGRAM_STYLE}</style>
+<link rel="stylesheet" href="${p.diagramStyleUri}" nonce="${p.nonce}">
 </head>
 <body>
 <header class="bar">
@@ -49,9 +56,9 @@ export function panelHtml(p: PanelPage): string {
           <th scope="col" data-col="title" aria-sort="none"><button type="button">Title</button></th>
           <th scope="col" data-col="method" aria-sort="none"><button type="button">Method</button></th>
           <th scope="col" data-col="criterion" aria-sort="none"><button type="button">Criterion</button></th>
-          <th scope="col" data-col="n_f" class="num" aria-sort="none"><button type="button">n<sub>f</sub></button></th>
-          <th scope="col" data-col="n_y" class="num" aria-sort="none"><button type="button">n<sub>y</sub></button></th>
-          <th scope="col" data-col="life" class="num" aria-sort="none"><button type="button">N<sub>f</sub> or D</button></th>
+          <th scope="col" data-col="n_f" class="num" aria-sort="none"><button type="button" title="n_f: fatigue safety factor (chosen criterion and load line)">n<sub>f</sub> fatigue</button></th>
+          <th scope="col" data-col="n_y" class="num" aria-sort="none"><button type="button" title="n_y: first-cycle yield safety factor (Langer)">n<sub>y</sub> yield</button></th>
+          <th scope="col" data-col="life" class="num" aria-sort="none"><button type="button" title="the life or damage result the check's method names: N_f cycles to failure, D_sum Miner damage of one pass, N_cg crack-growth cycles ...">Life or damage</button></th>
           <th scope="col" data-col="status" aria-sort="none"><button type="button">Status</button></th>
         </tr></thead>
         <tbody id="rows"></tbody>

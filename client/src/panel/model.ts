@@ -1,9 +1,8 @@
 /**
  * From the server's summary records to what the panel shows: table rows with sort keys,
- * and for every check its requirements, diagrams (drawn by the core) and derivation list.
- * A view: every number is one the core computed and formatted.
+ * and for every check its requirements, diagrams (drawn by the core in the server) and
+ * derivation list. A view: every number is one the core computed and formatted.
  */
-import { checkDiagrams, methodViews } from '@fatigue-notes/core';
 import { problemCounts, type SummaryCheck } from '../summary';
 import type { Cell, DerivationItem, PanelDetail, PanelModel, PanelRow } from './protocol';
 
@@ -20,8 +19,8 @@ export function rowKey(check: SummaryCheck, index: number): string {
 
 export function buildRows(checks: readonly SummaryCheck[]): PanelRow[] {
   return checks.map((c, index) => {
-    const lifeName =
-      methodViews(c.method).life.find((n) => c.values?.[n]) ?? methodViews(c.method).life[0] ?? 'N_f';
+    // The life column's value is the one the server names (the core's list of what each view shows).
+    const lifeName = c.shown?.life ?? '';
     return {
       index,
       key: rowKey(c, index),
@@ -31,14 +30,14 @@ export function buildRows(checks: readonly SummaryCheck[]): PanelRow[] {
       criterion: c.criterion ?? '',
       n_f: cell(c, 'n_f'),
       n_y: cell(c, 'n_y'),
-      life: { ...cell(c, lifeName), name: lifeName },
+      life: { ...cell(c, lifeName), name: lifeName, meaning: c.values?.[lifeName]?.meaning ?? '' },
       status: c.status,
       line: c.range.start.line + 1,
     };
   });
 }
 
-export function buildDetail(check: SummaryCheck, index: number, digits?: number): PanelDetail {
+export function buildDetail(check: SummaryCheck, index: number): PanelDetail {
   const derivation: DerivationItem[] = [];
   for (const name of check.order ?? Object.keys(check.values ?? {})) {
     const v = check.values?.[name];
@@ -50,7 +49,7 @@ export function buildDetail(check: SummaryCheck, index: number, digits?: number)
     if (v.source) item.source = v.source;
     if (v.notes && v.notes.length > 0) item.notes = v.notes;
     if (v.assumption) item.assumption = v.assumption;
-    if (v.tool) item.tool = `${v.tool.display} (${v.tool.formula})`;
+    if (v.tool) item.tool = `${v.tool.label} (${v.tool.formula})`;
     derivation.push(item);
   }
   return {
@@ -65,11 +64,7 @@ export function buildDetail(check: SummaryCheck, index: number, digits?: number)
       actual: r.actualDisplay,
       met: r.met,
     })),
-    diagrams: checkDiagrams(check, {
-      embedStyle: false,
-      unitSystem: check.unitSystem,
-      ...(digits ? { digits } : {}),
-    }),
+    diagrams: check.diagrams ?? [],
     derivation,
     tables: check.tables ?? [],
   };
@@ -79,7 +74,6 @@ export function buildPanelModel(
   note: { fileName: string } | undefined,
   checks: readonly SummaryCheck[],
   error?: string,
-  digits?: number,
 ): PanelModel {
   if (!note) return { state: 'no-note', rows: [], details: [] };
   if (error) return { state: 'error', fileName: note.fileName, message: error, rows: [], details: [] };
@@ -88,6 +82,6 @@ export function buildPanelModel(
     state: 'note',
     fileName: note.fileName,
     rows: buildRows(checks),
-    details: checks.map((c, i) => buildDetail(c, i, digits)),
+    details: checks.map((c, i) => buildDetail(c, i)),
   };
 }

@@ -17,8 +17,8 @@ export interface PanelRow {
   criterion: string;
   n_f: Cell;
   n_y: Cell;
-  /** The first of the method's life names the check has (`methodViews(method).life`). */
-  life: Cell & { name: string };
+  /** The first of the method's life names the check has (the server's `shown.life`), with its meaning. */
+  life: Cell & { name: string; meaning: string };
   status: 'pass' | 'fail' | 'error' | 'unchecked';
   /** 1-based line of the block's opening fence, for screen readers and tooltips. */
   line: number;
@@ -59,7 +59,8 @@ export interface PanelModel {
   details: PanelDetail[];
 }
 
-export type ToPanel = { type: 'model'; model: PanelModel };
+/** The model to show; `select` is the key of a row to select (the lens above a block was clicked). */
+export type ToPanel = { type: 'model'; model: PanelModel; select?: string };
 
 export type FromPanel =
   | { type: 'ready' }

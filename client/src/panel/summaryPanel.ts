@@ -4,7 +4,7 @@
  */
 import * as vscode from 'vscode';
 import type { SummaryService, SummaryState } from '../summaryService';
-import { makeNonce, panelHtml } from './html';
+import { DIAGRAM_STYLE_FILE, makeNonce, panelHtml } from './html';
 import { buildPanelModel } from './model';
 import type { FromPanel, ToPanel } from './protocol';
 
@@ -14,12 +14,21 @@ export class SummaryPanel implements vscode.Disposable {
   private static current: SummaryPanel | undefined;
   private readonly disposables: vscode.Disposable[] = [];
   private ready = false;
+  /** A check to select once the note it belongs to is shown. */
+  private select: { uri: string; id: string } | undefined;
 
-  static show(context: vscode.ExtensionContext, service: SummaryService, digits: () => number): SummaryPanel {
+  /** Opens (or reveals) the panel; `select` names a check to select (from the lens above its block). */
+  static show(
+    context: vscode.ExtensionContext,
+    service: SummaryService,
+    select?: { uri: string; id: string },
+  ): SummaryPanel {
     const doc = vscode.window.activeTextEditor?.document;
     if (doc && doc.languageId === 'markdown') service.follow(doc);
     else service.refresh();
     if (SummaryPanel.current) {
+      SummaryPanel.current.select = select;
+      SummaryPanel.current.post(service.current);
       SummaryPanel.current.panel.reveal(vscode.ViewColumn.Beside, true);
       return SummaryPanel.current;
     }
@@ -37,7 +46,8 @@ export class SummaryPanel implements vscode.Disposable {
       },
     );
     panel.iconPath = vscode.Uri.joinPath(context.extensionUri, 'media', 'icon.png');
-    SummaryPanel.current = new SummaryPanel(panel, context, service, digits);
+    SummaryPanel.current = new SummaryPanel(panel, context, service);
+    SummaryPanel.current.select = select;
     return SummaryPanel.current;
   }
 
@@ -45,7 +55,6 @@ export class SummaryPanel implements vscode.Disposable {
     private readonly panel: vscode.WebviewPanel,
     context: vscode.ExtensionContext,
     private readonly service: SummaryService,
-    private readonly digits: () => number,
   ) {
     const webview = panel.webview;
     webview.html = panelHtml({
@@ -56,6 +65,9 @@ export class SummaryPanel implements vscode.Disposable {
         .toString(),
       styleUri: webview
         .asWebviewUri(vscode.Uri.joinPath(context.extensionUri, 'media', 'panel.css'))
+        .toString(),
+      diagramStyleUri: webview
+        .asWebviewUri(vscode.Uri.joinPath(context.extensionUri, 'dist', DIAGRAM_STYLE_FILE))
         .toString(),
     });
     this.disposables.push(
@@ -71,8 +83,16 @@ export class SummaryPanel implements vscode.Disposable {
 
   private post(s: SummaryState): void {
     if (!this.ready) return;
-    const model = buildPanelModel(s.document, s.checks, s.error, this.digits());
+    const model = buildPanelModel(s.document, s.checks, s.error);
     const msg: ToPanel = { type: 'model', model };
+    if (
+      this.select &&
+      s.document?.uri.toString() === this.select.uri &&
+      model.rows.some((r) => r.key === this.select?.id)
+    ) {
+      msg.select = this.select.id;
+      this.select = undefined;
+    }
     void this.panel.webview.postMessage(msg);
     this.panel.title = s.document ? `Fatigue checks: ${s.document.fileName}` : 'Fatigue checks';
   }

@@ -14,9 +14,11 @@ import {
   methods,
   nameInfo,
   OPTIONS,
+  optionInfo,
   type Position,
   RESULT_NAMES,
   unitChoices,
+  wordOwners,
 } from '@fatigue-notes/core';
 import {
   type CompletionItem,
@@ -73,12 +75,13 @@ export function completionsAt(view: NoteView, pos: Position): CompletionItem[] {
   if (option && option[1] !== 'require' && option[1] !== 'solve' && option[1] !== 'spectrum') {
     const [, key, partial] = option;
     if (key === 'material') return materials(replace(partial));
-    const values = OPTIONS[key]?.values;
+    const info = optionInfo(key, check.method);
+    const values = info?.values;
     if (!values) return [];
     return Object.entries(values).map(([word, meaning], i) => ({
       label: word,
       kind: CompletionItemKind.EnumMember,
-      detail: OPTIONS[key].default === word ? 'default' : undefined,
+      detail: info.default === word ? 'default' : undefined,
       documentation: meaning,
       sortText: String(i).padStart(3, '0'),
       textEdit: { range: replace(partial), newText: word },
@@ -106,7 +109,7 @@ export function completionsAt(view: NoteView, pos: Position): CompletionItem[] {
   const unit = /(?:^|[^A-Za-z0-9_.])[0-9]+(?:\.[0-9]*)?(?:[eE][+-]?[0-9]+)?\s+([A-Za-z]*)$/.exec(prefix);
   if (unit && prefix.includes('=')) {
     const nameMatch = /([A-Za-z_][A-Za-z0-9_]*)\s*=[^=,]*$/.exec(prefix);
-    const dim = nameMatch ? nameInfo(nameMatch[1])?.dim : undefined;
+    const dim = nameMatch ? nameInfo(nameMatch[1], check.method)?.dim : undefined;
     return unitChoices(dim, check.unitSystem).map((u, i) => ({
       label: u.unit,
       kind: CompletionItemKind.Unit,
@@ -151,8 +154,11 @@ export function completionsAt(view: NoteView, pos: Position): CompletionItem[] {
 function statementStarts(check: CheckResult, range: Range): CompletionItem[] {
   const items: CompletionItem[] = [];
   const statedNames = new Set(check.order.filter((n) => check.values[n].origin === 'stated'));
-  for (const [name, info] of Object.entries(INPUT_NAMES)) {
-    if (statedNames.has(name)) continue;
+  // The shared words and the check's own method's words; another method's words are not offered.
+  const mine = (name: string) => wordOwners(name)?.includes(check.method) ?? true;
+  for (const [name, shared] of Object.entries(INPUT_NAMES)) {
+    if (statedNames.has(name) || !mine(name)) continue;
+    const info = nameInfo(name, check.method) ?? shared;
     items.push({
       label: name,
       kind: CompletionItemKind.Variable,
@@ -162,8 +168,9 @@ function statementStarts(check: CheckResult, range: Range): CompletionItem[] {
       textEdit: { range, newText: `${name} = ` },
     });
   }
-  for (const [name, info] of Object.entries(RESULT_NAMES)) {
-    if (statedNames.has(name) || name in INPUT_NAMES) continue;
+  for (const [name, shared] of Object.entries(RESULT_NAMES)) {
+    if (statedNames.has(name) || name in INPUT_NAMES || !mine(name)) continue;
+    const info = nameInfo(name, check.method) ?? shared;
     items.push({
       label: name,
       kind: CompletionItemKind.Variable,
@@ -173,7 +180,9 @@ function statementStarts(check: CheckResult, range: Range): CompletionItem[] {
       textEdit: { range, newText: `${name} = ` },
     });
   }
-  for (const [key, info] of Object.entries(OPTIONS)) {
+  for (const key of Object.keys(OPTIONS)) {
+    const info = optionInfo(key, check.method);
+    if (!info || !mine(key)) continue;
     items.push({
       label: `${key}:`,
       filterText: key,

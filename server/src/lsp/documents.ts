@@ -1,7 +1,7 @@
 /**
  * The open notes: their text (kept with LSP incremental sync), an incremental evaluation
- * session each, and the scheduling of their evaluation: debounced, sliced, and abandoned
- * when a newer version arrives. Requests that need the current result call `view()`,
+ * session each, and the scheduling of their evaluation: at once when a note is opened,
+ * debounced while it is edited, sliced, and abandoned when a newer version arrives. Requests that need the current result call `view()`,
  * which finishes any pending evaluation first.
  *
  * Large notes (issue 7): the Markdown parse of a note of `LARGE_NOTE_CHARS` or more runs on
@@ -76,15 +76,17 @@ export class NoteDocuments {
       throw new TypeError('open needs a uri and a text');
     this.close(uri);
     const doc = TextDocument.create(uri, languageId, version, text);
-    this.notes.set(uri, {
+    const note: OpenNote = {
       doc,
       session: this.newSession(uri),
       pending: [],
       pendingOverflow: false,
       evaluatedVersion: -1,
       lastCostMs: 0,
-    });
-    this.schedule(uri, 0);
+    };
+    this.notes.set(uri, note);
+    // No debounce on open: the first slice runs now, and a small note is published at once.
+    this.startJob(uri, note);
   }
 
   change(uri: string, version: number, changes: Array<{ range?: TextChange['range']; text: string }>): void {

@@ -10,10 +10,13 @@ import {
   type Diagnostic,
   findMaterial,
   formatNumber,
+  headlineValues,
   nameInfo,
   OPTIONS,
+  optionInfo,
   type Position,
   type Value,
+  wordOwners,
 } from '@fatigue-notes/core';
 import { type Hover, MarkupKind, type Range } from 'vscode-languageserver/node';
 import { checkAt, checkById, contains, type NoteView, statementOn, type Word, wordAt } from './locate';
@@ -103,11 +106,21 @@ function describeWord(
       };
     }
   }
-  if (v) return { markdown: derivation(v, digits), range: wordRange(word.start, word.end) };
-  const info = nameInfo(name);
+  const owners = wordOwners(name);
+  const foreign = owners && !owners.includes(check.method);
+  const whose = foreign
+    ? ` A word of ${owners.map((m) => `\`method: ${m}\``).join(' or ')} checks: this check does not read it.`
+    : '';
+  if (v)
+    return {
+      markdown: `${derivation(v, digits)}${whose ? `\n\n${whose.trim()}` : ''}`,
+      range: wordRange(word.start, word.end),
+    };
+  const info = nameInfo(name, check.method);
+  const elsewhere = whose || ' Not available in this check.';
   if (info)
     return {
-      markdown: `**\`${name}\`**: ${info.meaning} (${DIM_LABEL[info.dim]}). Not available in this check.`,
+      markdown: `**\`${name}\`**: ${info.meaning} (${DIM_LABEL[info.dim]}).${elsewhere}`,
       range: wordRange(word.start, word.end),
     };
   return undefined;
@@ -120,7 +133,7 @@ export function derivation(v: Value, digits = 4): string {
   if (v.unused) out.push(`*Not used:* ${v.unused}.`);
   if (v.origin === 'stated' && v.tool) {
     out.push(
-      `Stated in the note: \`${v.expression ?? v.display}\` = **${v.display}**. The tool's own value: **${v.tool.display}**` +
+      `Stated in the note: \`${v.expression ?? v.display}\` = **${v.display}**, used in place of what fatigue-notes would compute: **${v.tool.display}** (${v.tool.basis}, ${v.tool.why})` +
         (v.tool.formula ? `, from \`${v.tool.formula}\`` : '') +
         (v.tool.source ? ` (${v.tool.source})` : ''),
     );
@@ -143,9 +156,7 @@ export function derivation(v: Value, digits = 4): string {
 
 export function checkSummary(c: CheckResult): string {
   const head = `**${c.id ?? '(check without id)'}**${c.title ? ` — ${c.title}` : ''}`;
-  const key = ['n_f', 'n_y', 'N_f', 'S_f', 'D', 'repeats', 'N_cg', 'N_insp']
-    .filter((n) => c.values[n])
-    .map((n) => `${n} = ${c.values[n].display}`);
+  const key = headlineValues(c).map((v) => `${v.name} = ${v.display}`);
   const reqs = c.requirements.map((r) => `${r.met === true ? '✓' : r.met === false ? '✗' : '?'} ${r.text}`);
   const lines = [
     head,
@@ -157,7 +168,7 @@ export function checkSummary(c: CheckResult): string {
 }
 
 function optionKeyDoc(key: string, check: CheckResult, line: number): string {
-  const info = OPTIONS[key];
+  const info = optionInfo(key, check.method);
   if (!info) return `\`${key}:\` is not an option of a fatigue check.`;
   const out = [`**\`${key}:\`** ${info.meaning}`];
   if (info.values)

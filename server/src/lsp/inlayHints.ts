@@ -4,14 +4,12 @@
  * (`n_f`, `n_y`, `N_f`, or `D`, `N_cg` ...), each requirement's actual value and verdict
  * beside its `require:` item, and the tool's own value beside a value the note overrides.
  */
-import type { CheckResult, Range, Value } from '@fatigue-notes/core';
+import { type CheckResult, headlineRank, type Range, type Value } from '@fatigue-notes/core';
 import { type InlayHint, InlayHintKind } from 'vscode-languageserver/node';
 import { isContentLine, type NoteView, overlaps } from './locate';
 
 /** Most values shown beside one line; the rest are in the hover. */
 const MAX_PER_LINE = 4;
-/** Results shown first when a line drives many. */
-const KEY_RESULTS = ['n_f', 'n_y', 'N_f', 'S_f', 'D', 'repeats', 'N_eq', 'N_cg', 'N_insp', 'a_c'];
 /** Shown in the hover and the panel, not inline (they would crowd the criterion line); the per-fibre values (`n_y_neg` ...) too. */
 const NOT_INLINE = /^(n_f_|sigma_ar$)|_(pos|neg)$/;
 
@@ -40,20 +38,28 @@ function hintsOfCheck(view: NoteView, c: CheckResult, range: Range, out: InlayHi
   const requireLines = new Set(c.requirements.map((r) => r.range.start.line));
   for (const [line, values] of byLine) {
     if (requireLines.has(line)) continue;
-    const ranked = values.slice().sort((a, b) => rank(a.name) - rank(b.name));
+    // The check's headline results first (the core's one list of what each view shows).
+    const ranked = values.slice().sort((a, b) => headlineRank(c, a.name) - headlineRank(c, b.name));
     const shown = ranked.slice(0, MAX_PER_LINE);
+    // A stated value: what the tool would compute and why (`fit 1: no notch feature stated`).
     const parts = shown.map((v) =>
       v.origin === 'stated' && v.tool
-        ? `tool ${v.tool.display}`
+        ? v.tool.label
         : `${v.name} ${v.display}${v.unused ? ' (not used)' : ''}`,
     );
-    if (ranked.length > shown.length) parts.push('…');
+    if (ranked.length > shown.length) parts.push('… more in the hover');
     out.push({
       position: { line, character: view.line(line).length },
       label: parts.join(' · '),
       paddingLeft: true,
       kind: InlayHintKind.Type,
-      tooltip: shown.map((v) => `${v.name}: ${v.meaning}`).join('\n'),
+      tooltip: shown
+        .map((v) =>
+          v.origin === 'stated' && v.tool
+            ? `${v.name} = ${v.display} as stated; fatigue-notes would compute ${v.tool.display} (${v.tool.formula})`
+            : `${v.name}: ${v.meaning}`,
+        )
+        .join('\n'),
     });
   }
   for (const r of c.requirements) {
@@ -68,9 +74,4 @@ function hintsOfCheck(view: NoteView, c: CheckResult, range: Range, out: InlayHi
       tooltip: `${r.symbol} = ${r.actualDisplay}, required ${r.op} ${r.targetDisplay}`,
     });
   }
-}
-
-function rank(name: string): number {
-  const i = KEY_RESULTS.indexOf(name);
-  return i < 0 ? KEY_RESULTS.length : i;
 }

@@ -44,6 +44,12 @@ import {
   sameSettings,
 } from './settings';
 import { SUMMARY_REQUEST, type SummaryParams, summaryOf } from './summary';
+import {
+  TEMPLATE_SNIPPET_REQUEST,
+  TEMPLATES_REQUEST,
+  templateChoices,
+  templateSnippetFor,
+} from './templates';
 
 export function startServer(): void {
   const connection = createConnection(ProposedFeatures.all);
@@ -76,6 +82,8 @@ export function listen(connection: Connection): void {
   let canWatchFolders = false;
 
   const log = (message: string) => connection.console.error(message);
+  /** When each note was opened, until its first results are published (logged: the time to first answer). */
+  const openedAt = new Map<string, number>();
 
   const documents = new NoteDocuments({
     settings: () => settings,
@@ -86,6 +94,13 @@ export function listen(connection: Connection): void {
         void connection.sendDiagnostics(publishParams(uri, version, view.result, view));
       } catch (e) {
         log(`cannot publish diagnostics of ${uri}: ${String(e)}`);
+      }
+      const t0 = openedAt.get(uri);
+      if (t0 !== undefined) {
+        openedAt.delete(uri);
+        connection.console.info(
+          `${uri.split('/').pop()}: first results published ${(performance.now() - t0).toFixed(0)} ms after it was opened`,
+        );
       }
     },
     onError: log,
@@ -210,13 +225,17 @@ export function listen(connection: Connection): void {
   );
 
   connection.onDidOpenTextDocument((p) =>
-    notify('didOpen', p, openParams, (o) => documents.open(o.uri, o.languageId, o.version, o.text)),
+    notify('didOpen', p, openParams, (o) => {
+      openedAt.set(o.uri, performance.now());
+      documents.open(o.uri, o.languageId, o.version, o.text);
+    }),
   );
   connection.onDidChangeTextDocument((p) =>
     notify('didChange', p, changeParams, (c) => documents.change(c.uri, c.version, c.changes)),
   );
   connection.onDidCloseTextDocument((p) =>
     notify('didClose', p, closeParams, ({ uri }) => {
+      openedAt.delete(uri);
       if (documents.close(uri)) void connection.sendDiagnostics({ uri, diagnostics: [] });
     }),
   );
@@ -309,6 +328,10 @@ export function listen(connection: Connection): void {
       if (!v) throw new ResponseError(ErrorCodes.InvalidParams, `${uri} is not open`);
       return summaryOf(v);
     }),
+  );
+  connection.onRequest(TEMPLATES_REQUEST, () => guard('templates', [], () => templateChoices()));
+  connection.onRequest(TEMPLATE_SNIPPET_REQUEST, (p: unknown) =>
+    guard('templateSnippet', null, () => templateSnippetFor(p)),
   );
 }
 

@@ -1,9 +1,19 @@
 /**
- * `fatigue/summary` (params `{ uri }`): every check's record for the client's summary panel:
- * id, title, method, criterion, status, values, requirements, the data of its diagrams,
- * its tables and its range in the note.
+ * `fatigue/summary` (params `{ uri }`): every check's record for the client's summary panel
+ * and Markdown preview, for the version of the note the server evaluated: id, title,
+ * method, criterion, status, values, requirements, the names each view shows (from the
+ * core's one list), the diagrams drawn as SVG, the data behind them, its tables, its range
+ * in the note and its diagnostics counted. The client draws and computes nothing itself.
  */
-import type { CheckResult } from '@fatigue-notes/core';
+import {
+  type CheckDiagram,
+  type CheckResult,
+  checkDiagrams,
+  type MethodFields,
+  methodModule,
+  type NoteResult,
+  shownNames,
+} from '@fatigue-notes/core';
 import type { NoteView } from './locate';
 
 export const SUMMARY_REQUEST = 'fatigue/summary';
@@ -12,7 +22,8 @@ export interface SummaryParams {
   uri: string;
 }
 
-export interface CheckSummary {
+/** The data behind the diagrams and tables are the fields the check's method declares (`MethodModule.fields`). */
+export interface CheckSummary extends Partial<MethodFields> {
   id: string | null;
   title?: string;
   method: CheckResult['method'];
@@ -22,27 +33,46 @@ export interface CheckSummary {
   values: CheckResult['values'];
   order: string[];
   requirements: CheckResult['requirements'];
-  haigh?: CheckResult['haigh'];
-  sn?: CheckResult['sn'];
-  tables?: CheckResult['tables'];
-  crackCurve?: CheckResult['crackCurve'];
-  histogram?: CheckResult['histogram'];
+  /** The names of `values` each view shows: one line, the preview's table, the panel's life column. */
+  shown: ReturnType<typeof shownNames>;
+  /** The check's diagrams as the core draws them, without an embedded style (the page supplies it). */
+  diagrams: CheckDiagram[];
   range: CheckResult['range'];
   headerRange: CheckResult['headerRange'];
-  diagnostics: { errors: number; warnings: number };
+  /** Counted (the editor shows the diagnostics themselves), with the first error's message. */
+  diagnostics: { errors: number; warnings: number; firstError?: string };
 }
 
 export interface NoteSummary {
   uri: string;
+  /** The document version these results are of. */
   version: number;
   checks: CheckSummary[];
 }
 
-export function summaryOf(view: NoteView): NoteSummary {
+/** Diagrams of a check record, drawn once per record and digit count (unchanged blocks keep their record). */
+const drawn = new WeakMap<CheckResult, { digits: number; diagrams: CheckDiagram[] }>();
+
+function diagramsOf(c: CheckResult, digits: number): CheckDiagram[] {
+  const hit = drawn.get(c);
+  if (hit && hit.digits === digits) return hit.diagrams;
+  const diagrams = checkDiagrams(c, { embedStyle: false, unitSystem: c.unitSystem, digits });
+  drawn.set(c, { digits, diagrams });
+  return diagrams;
+}
+
+/** The summary of one evaluated note (also what the client's tests build from `evaluateNote`). */
+export function summaryOfResult(
+  uri: string,
+  version: number,
+  result: NoteResult,
+  digits: number,
+): NoteSummary {
   return {
-    uri: view.uri,
-    version: view.version,
-    checks: view.result.checks.map((c) => {
+    uri,
+    version,
+    checks: result.checks.map((c) => {
+      const errors = c.diagnostics.filter((d) => d.severity === 'error');
       const s: CheckSummary = {
         id: c.id,
         method: c.method,
@@ -51,21 +81,25 @@ export function summaryOf(view: NoteView): NoteSummary {
         values: c.values,
         order: c.order,
         requirements: c.requirements,
+        shown: shownNames(c),
+        diagrams: diagramsOf(c, digits),
         range: c.range,
         headerRange: c.headerRange,
         diagnostics: {
-          errors: c.diagnostics.filter((d) => d.severity === 'error').length,
+          errors: errors.length,
           warnings: c.diagnostics.filter((d) => d.severity === 'warning').length,
         },
       };
+      if (errors[0]) s.diagnostics.firstError = errors[0].message;
       if (c.title !== undefined) s.title = c.title;
       if (c.criterion !== undefined) s.criterion = c.criterion;
-      if (c.haigh) s.haigh = c.haigh;
-      if (c.sn) s.sn = c.sn;
-      if (c.tables) s.tables = c.tables;
-      if (c.crackCurve) s.crackCurve = c.crackCurve;
-      if (c.histogram) s.histogram = c.histogram;
+      for (const f of methodModule(c.method)?.fields ?? [])
+        if (c[f] !== undefined) (s as unknown as Record<string, unknown>)[f] = c[f];
       return s;
     }),
   };
+}
+
+export function summaryOf(view: NoteView): NoteSummary {
+  return summaryOfResult(view.uri, view.version, view.result, view.settings.significantDigits);
 }

@@ -19,6 +19,7 @@ import {
   formatNumber,
   type NoteResult,
   type RequirementResult,
+  shownNames,
   type Value,
 } from '@fatigue-notes/core';
 import { REPORT_STYLE } from './reportStyle';
@@ -43,8 +44,6 @@ export const CAUTIONS: readonly string[] = [
 
 /** Significant digits of the intermediate terms (the values themselves come displayed by the core). */
 const TERM_DIGITS = 5;
-
-const KEY_RESULTS = ['n_f', 'n_y', 'N_f', 'S_f', 'D', 'repeats', 'N_cg', 'N_insp'];
 
 function esc(text: string): string {
   return text
@@ -141,11 +140,9 @@ function cautions(): string {
 function summaryTable(checks: CheckResult[]): string {
   if (checks.length === 0) return '<p class="empty">The note has no fatigue check blocks.</p>';
   const rows = checks.map((c) => {
-    const solved = c.order.filter((n) => isSolved(c.values[n]));
-    const key = [
-      ...solved,
-      ...KEY_RESULTS.filter((n) => c.values[n]?.origin === 'computed' && !solved.includes(n)),
-    ]
+    // The method's headline results (its registry entry), dimensions found by `solve:` first.
+    const key = shownNames(c)
+      .headline.filter((n) => isSolved(c.values[n]) || c.values[n].origin === 'computed')
       .map((n) => `<span class="sym">${esc(n)}</span>&nbsp;=&nbsp;${esc(c.values[n].display)}`)
       .join(', ');
     const reqs = c.requirements.map((r) => `${requirementBadge(r)} <code>${esc(r.text)}</code>`).join('<br>');

@@ -7,8 +7,8 @@
  * the governing one is reported, with the shell parameter of the opening.
  */
 import { type Computed, computed, MM, type Term } from '../computed';
-import type { CheckContext } from '../language/checkContext';
-import type { Range } from '../language/types';
+import type { CheckContext } from '../context/checkContext';
+import type { Range } from '../context/types';
 import type { MaterialClass } from '../materials';
 import {
   type CutoutPoint,
@@ -220,7 +220,10 @@ function shellCutoutConcentration(
   // Kt at the governing point (a stated Kt replaces it; the tool's value stays beside it).
   let Kt: number | null;
   if (gov && w !== undefined && h !== undefined) {
-    Kt = ctx.result('Kt', shellCutoutKt(w, h, k, gov.point.eta), ['w_c', 'h_c'], { range });
+    Kt = ctx.result('Kt', shellCutoutKt(w, h, k, gov.point.eta), ['w_c', 'h_c'], {
+      range,
+      tool: { basis: 'elastic solution' },
+    });
   } else Kt = ctx.input('Kt') ?? null;
   if (Kt === null) return null;
   if (Kt < 1)
@@ -377,7 +380,10 @@ export function concentration(
           fitInputs = fit.inputs;
           r = fit.r;
           const rangeName = ctx.has('r') ? 'r' : fit.inputs[fit.inputs.length - 1];
-          Kt = ctx.result(ktName, fit.c, fit.inputs, { range: ctx.rangeOf(rangeName) });
+          Kt = ctx.result(ktName, fit.c, fit.inputs, {
+            range: ctx.rangeOf(rangeName),
+            tool: { basis: 'fit' },
+          });
           const stated = ctx.values[ktName];
           if (stated?.origin === 'stated' && stated.tool?.si) {
             const rel = Math.abs(stated.si! - stated.tool.si) / stated.tool.si;
@@ -402,8 +408,13 @@ export function concentration(
           ),
           [],
           feature === 'none'
-            ? { range: featureRange }
-            : { range: featureRange, origin: 'default', assumption: 'no `feature:` stated: Kt = 1' },
+            ? { range: featureRange, tool: { basis: 'fit', why: 'plain section (feature: none)' } }
+            : {
+                range: featureRange,
+                origin: 'default',
+                assumption: 'no `feature:` stated: Kt = 1',
+                tool: { basis: 'fit', why: 'no notch feature stated' },
+              },
         );
       }
       if (Kt === null) {

@@ -4,9 +4,10 @@
  * warning and a quick fix), Morrow's sigma_f_prime and Walker's gamma estimated when the
  * chosen model needs them and the note does not state them.
  */
+
+import type { CheckContext } from '../context/checkContext';
+import type { Range } from '../context/types';
 import type { CriterionKey, LoadLine, StrengthSet } from '../criteria';
-import type { CheckContext } from '../language/checkContext';
-import type { Range } from '../language/types';
 import { defaultWalkerGamma, estimateSigmaFPrimeSteel } from '../meanstress';
 import type { EnduranceChain } from './enduranceChain';
 import type { Strengths } from './material';
@@ -50,6 +51,15 @@ export function strengthSetFor(
     sigma_f_prime =
       ctx.result('sigma_f_prime', estimateSigmaFPrimeSteel(Sut), ['Sut'], { range: critRange }) ?? undefined;
   let gamma = ctx.input('gamma_walker');
+  if (gamma === undefined && criterion === 'walker' && st.family !== 'steel')
+    // Dowling's correlation is for steels; an average of other alloys hides a spread whose
+    // low end (high-strength aluminium) is more sensitive to the mean stress than the average.
+    ctx.diag(
+      'error',
+      'walker-gamma-family',
+      `Walker's gamma has a published correlation for steels only (Dowling, Calhoun & Arcari 2009); for ${st.family} state \`gamma_walker\` from test data of the alloy (aluminium alloys range from about 0.45 for high-strength to 0.65 for medium-strength grades, from memory)`,
+      critRange,
+    );
   if (gamma === undefined && criterion === 'walker')
     gamma =
       ctx.result(

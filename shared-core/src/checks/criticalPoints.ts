@@ -21,8 +21,8 @@
  * and a shell (membrane stresses, one point per location).
  */
 import type { MethodNote } from '../computed';
-import type { CheckContext } from '../language/checkContext';
-import type { Range } from '../language/types';
+import type { CheckContext } from '../context/checkContext';
+import type { Range } from '../context/types';
 import type { Component } from './loads';
 
 export type PointKey = 'pos' | 'neg';

@@ -3,9 +3,9 @@
  * life for a material without one), the fatigue strength fraction and the S-N line.
  */
 import { computed } from '../computed';
+import type { CheckContext } from '../context/checkContext';
 import { fatigueStrengthFraction, rotatingBeamEndurance } from '../endurance';
 import { marinCorrected } from '../endurance/marinEquation';
-import type { CheckContext } from '../language/checkContext';
 import {
   loadFactor,
   miscFactor,
@@ -15,7 +15,7 @@ import {
   temperatureFactor,
 } from '../marin';
 import type { SurfaceFinish } from '../marin/surface';
-import { FAMILIES } from '../materials';
+import { FAMILIES, type MaterialFamily } from '../materials';
 import { type SnLine, snLineFromBasquin, snLineThrough } from '../sn';
 import type { Strengths } from './material';
 
@@ -42,6 +42,9 @@ interface MarinFactors {
   all: boolean;
 }
 
+/** Highest temperature read as room temperature for a family other than steel (50 degC). */
+const NON_STEEL_ROOM_MAX = 273.15 + 50;
+
 /** Marin factors, stated values winning over the derived ones. */
 function marinFactors(
   ctx: CheckContext,
@@ -49,6 +52,7 @@ function marinFactors(
   load: LoadKind,
   geometry: 'round' | 'plate' | 'shell',
   hasAxial: boolean,
+  family: MaterialFamily,
 ): MarinFactors {
   let ok = true;
   // ka: surface
@@ -118,7 +122,39 @@ function marinFactors(
   // kd: temperature
   let kd: number | null;
   const T = ctx.input('temp');
-  if (T !== undefined) kd = ctx.result('kd', temperatureFactor(T), ['temp'], { range: ctx.rangeOf('temp') });
+  if (T !== undefined && family !== 'steel' && T > NON_STEEL_ROOM_MAX && !ctx.has('kd')) {
+    // Eq. 6-27 is a fit to steels; lighter alloys lose strength sooner and faster (an
+    // aluminium alloy at 150 degC keeps well under the steel fit's 1.0): no credit, no guess.
+    const TC = T - 273.15;
+    ctx.diag(
+      'error',
+      'kd-not-for-family',
+      `kd of Shigley Eq. (6-27) is a fit to steels (Table 6-4); it does not hold for ${family} at ${TC.toFixed(0)} degC, where the strength falls sooner and faster: state \`kd\` from the alloy's elevated-temperature fatigue data`,
+      ctx.rangeOf('temp'),
+    );
+    kd = ctx.result(
+      'kd',
+      computed(
+        1,
+        'kd = 1 (shown only: not valid for this family at this temperature)',
+        'no fit for this family',
+      ),
+      ['temp'],
+      { range: ctx.rangeOf('temp') },
+    );
+  } else if (T !== undefined && family !== 'steel' && !ctx.has('kd'))
+    kd = ctx.result(
+      'kd',
+      computed(
+        1,
+        `kd = 1 (${family} at room temperature, up to ${(NON_STEEL_ROOM_MAX - 273.15).toFixed(0)} degC)`,
+        'room temperature: common practice, no source (handbook properties of light alloys are room-temperature values)',
+      ),
+      ['temp'],
+      { range: ctx.rangeOf('temp') },
+    );
+  else if (T !== undefined)
+    kd = ctx.result('kd', temperatureFactor(T), ['temp'], { range: ctx.rangeOf('temp') });
   else if (ctx.has('kd')) kd = ctx.input('kd')!;
   else {
     const room = ctx.system === 'US' ? '70 degF' : '20 degC';
@@ -267,7 +303,7 @@ export function enduranceChain(
   const hasEndurance = st.enduranceLimit;
   const sName = hasEndurance ? 'Se' : 'S_ref';
   const chain = <T>(run: () => T): T => (ctx.has(sName) ? ctx.replacedBy(sName, run) : run());
-  const k = chain(() => marinFactors(ctx, Sut, load, geometry, hasAxial));
+  const k = chain(() => marinFactors(ctx, Sut, load, geometry, hasAxial, st.family));
 
   // Ultimate of the route and the base strength.
   const Su = shear
@@ -295,13 +331,20 @@ export function enduranceChain(
       ctx.result('Se_prime', rotatingBeamEndurance(st.cls, Sut), ['Sut'], { range: ctx.rangeOf('Sut') });
     const prime = chain(() => (ctx.has('Se_prime') ? ctx.replacedBy('Se_prime', estimate) : estimate()));
     const tool = k.all && prime !== null ? marinCorrected('Se', factorValues(k), prime, 'Se_prime') : null;
-    S = ctx.result('Se', tool, [...MARIN_INPUTS, 'Se_prime'], { range: ctx.header });
+    S = ctx.result('Se', tool, [...MARIN_INPUTS, 'Se_prime'], {
+      range: ctx.header,
+      tool: { basis: 'Marin equation' },
+    });
   } else {
     N_ref = referenceLife(ctx, st);
     const base = chain(() => referenceStrength(ctx, st, N_ref));
     const tool =
       k.all && base !== undefined ? marinCorrected('S_ref', factorValues(k), base, 'Sf_ref') : null;
-    S = ctx.result('S_ref', tool, [...MARIN_INPUTS, 'Sf_ref'], { dim: 'stress', range: ctx.header });
+    S = ctx.result('S_ref', tool, [...MARIN_INPUTS, 'Sf_ref'], {
+      dim: 'stress',
+      range: ctx.header,
+      tool: { basis: 'Marin equation' },
+    });
   }
 
   // S-N line.

@@ -10,8 +10,8 @@
  * critical points of the section (`criticalPoints.ts`) combine the components with these signs.
  */
 import { type Computed, computed } from '../computed';
-import type { CheckContext } from '../language/checkContext';
-import type { Range } from '../language/types';
+import type { CheckContext } from '../context/checkContext';
+import type { Range } from '../context/types';
 import {
   axialStress,
   bendingStress,

@@ -8,7 +8,7 @@
  * (`language/plausibility.ts`) and withhold the results.
  */
 
-import type { CheckContext } from '../language/checkContext';
+import type { CheckContext } from '../context/checkContext';
 import {
   FAMILIES,
   familyOfClass,

@@ -3,9 +3,9 @@
  * describe a section with a material: the assumed material family where it changed a result,
  * and a pass that hides a finite life.
  */
-import type { CheckContext } from '../language/checkContext';
-import type { RequireStatement } from '../language/statements';
-import type { RequirementResult } from '../language/types';
+import type { CheckContext } from '../context/checkContext';
+import type { RequireStatement } from '../context/statements';
+import type { RequirementResult } from '../context/types';
 
 /** Without `material:` or `material-family:` a steel is assumed: a warning where that decided a result. */
 export function assumedFamily(ctx: CheckContext): void {
@@ -13,7 +13,7 @@ export function assumedFamily(ctx: CheckContext): void {
   const v = ctx.values;
   const acts = (n: string) => v[n] !== undefined && v[n].origin === 'computed' && !v[n].unused;
   const decided: string[] = [];
-  const fatigue = ['n_f', 'N_f', 'S_f', 'D'].some((n) => v[n] !== undefined);
+  const fatigue = ['n_f', 'N_f', 'S_f', 'D_sum'].some((n) => v[n] !== undefined);
   if (fatigue && !ctx.has('Se'))
     decided.push(
       acts('Se_prime')

@@ -1,6 +1,6 @@
-import type { CheckContext } from '../language/checkContext';
-import type { RequireStatement } from '../language/statements';
-import type { RequirementResult } from '../language/types';
+import type { CheckContext } from '../context/checkContext';
+import type { RequireStatement } from '../context/statements';
+import type { RequirementResult } from '../context/types';
 import { methodModule } from '../methods/registry';
 import type { MethodExtras } from '../methods/types';
 

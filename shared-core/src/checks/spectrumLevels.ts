@@ -5,10 +5,10 @@
  * evaluated in the block's scope (earlier names and `other_id.name`); every problem is a
  * diagnostic on the exact item.
  */
-import type { CheckContext } from '../language/checkContext';
-import { ExpressionError, evaluateExpression, type Quantity } from '../language/expressions';
-import type { SpectrumStatement } from '../language/statements';
-import { lineRange, type Range } from '../language/types';
+import type { CheckContext } from '../context/checkContext';
+import { ExpressionError, type Quantity } from '../context/quantity';
+import type { SpectrumStatement } from '../context/statements';
+import { lineRange, type Range } from '../context/types';
 import { type DimKey, sameVector, vectorOf } from '../units/dimensions';
 
 /** The load or stress a spectrum name belongs to. */
@@ -62,12 +62,12 @@ function evaluate(
   item: SpectrumStatement['items'][number],
   line: number,
 ): Quantity | undefined {
-  if (!ctx.scope) {
+  if (!ctx.evaluate) {
     ctx.diag('error', 'internal', 'spectrum levels cannot be evaluated here (no scope)', item.expr.range);
     return undefined;
   }
   try {
-    return evaluateExpression(item.expr.text, ctx.scope);
+    return ctx.evaluate(item.expr.text);
   } catch (e) {
     const err = e instanceof ExpressionError ? e : new ExpressionError('expression-error', String(e));
     const start = item.expr.range.start.character + (err.offset ?? 0);

@@ -12,8 +12,8 @@
  * point otherwise.
  */
 import type { Computed } from '../computed';
-import type { CheckContext } from '../language/checkContext';
-import type { Range } from '../language/types';
+import type { CheckContext } from '../context/checkContext';
+import type { Range } from '../context/types';
 import {
   AXIAL_LOAD_FACTOR,
   axialStress,

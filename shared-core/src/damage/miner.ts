@@ -279,10 +279,10 @@ export class MinerAccumulator {
       }));
     const formula =
       this.rule === 'haibach'
-        ? 'D = sum(n_i / N_i); N_i = (sigma_ar_i / a)^(1/b) above S2, N2 * (S2 / sigma_ar_i)^(2k - 1) below'
+        ? 'D_sum = sum(n_i / N_i); N_i = (sigma_ar_i / a)^(1/b) above S2, N2 * (S2 / sigma_ar_i)^(2k - 1) below'
         : this.rule === 'elementary'
-          ? 'D = sum(n_i / N_i); N_i = (sigma_ar_i / a)^(1/b) at every level'
-          : 'D = sum(n_i / N_i); N_i = (sigma_ar_i / a)^(1/b), no damage below S2';
+          ? 'D_sum = sum(n_i / N_i); N_i = (sigma_ar_i / a)^(1/b) at every level'
+          : 'D_sum = sum(n_i / N_i); N_i = (sigma_ar_i / a)^(1/b), no damage below S2';
     return {
       ...computed(D, formula, MINER_SOURCE, terms, notes),
       D,
@@ -306,13 +306,13 @@ export function minerDamage(
   return acc.result(maxContributors);
 }
 
-/** Passes of the history (or spectrum) to failure: 1 / D; infinite when D = 0. */
+/** Passes of the history (or spectrum) to failure: 1 / D_sum; infinite when D_sum = 0. */
 export function repeatsToFailure(D: number | Computed): Computed {
   const d = typeof D === 'number' ? D : D.value;
-  const source = 'Palmgren-Miner rule: failure at D = 1 (Miner 1945)';
-  const terms: Term[] = [{ name: 'D', value: d, unit: '' }];
+  const source = 'Palmgren-Miner rule: failure at D_sum = 1 (Miner 1945)';
+  const terms: Term[] = [{ name: 'D_sum', value: d, unit: '' }];
   if (!Number.isFinite(d) || d < 0) {
-    return computed(0, 'repeats = 1 / D', source, terms, [
+    return computed(0, 'repeats = 1 / D_sum', source, terms, [
       {
         code: 'input-invalid',
         severity: 'error',
@@ -321,7 +321,7 @@ export function repeatsToFailure(D: number | Computed): Computed {
     ]);
   }
   if (d === 0) {
-    return infinite('repeats = 1 / D', source, terms, [
+    return infinite('repeats = 1 / D_sum', source, terms, [
       {
         code: 'no-damage',
         severity: 'information',
@@ -329,7 +329,7 @@ export function repeatsToFailure(D: number | Computed): Computed {
       },
     ]);
   }
-  return computed(1 / d, 'repeats = 1 / D', source, terms);
+  return computed(1 / d, 'repeats = 1 / D_sum', source, terms);
 }
 
 /**
@@ -343,9 +343,9 @@ export function equivalentCycles(
   rule: MinerRule = 'original',
 ): Computed {
   const d = typeof D === 'number' ? D : D.value;
-  const formula = 'N_eq = D * N(sigma_ref)';
+  const formula = 'N_eq = D_sum * N(sigma_ref)';
   const terms: Term[] = [
-    { name: 'D', value: d, unit: '' },
+    { name: 'D_sum', value: d, unit: '' },
     { name: 'sigma_ref', value: sigma_ref / MPA, unit: 'MPa' },
   ];
   if (!Number.isFinite(d) || d < 0) {

@@ -27,8 +27,11 @@
  * NAME (origin 'computed', formula `solved: SYMBOL(NAME) = target`) of the evaluation at
  * the answer, which provides every other value of the check.
  */
+
 import type { Term } from '../computed';
-import type { StatedInput } from '../language/checkContext';
+import type { StatedInput } from '../context/checkContext';
+import type { CheckResult, Diagnostic, QuickFix, Range, Severity, Value } from '../context/types';
+import { INPUT_NAMES, nearest, RESULT_NAMES } from '../context/vocabulary';
 import type { CheckScopeEntry } from '../language/checkScope';
 import { ExpressionError, evaluateExpression, rawFromSI, type Scope } from '../language/expressions';
 import type { BlockSource } from '../language/markdownBlocks';
@@ -38,8 +41,7 @@ import {
   type SolveStatement,
   type Statement,
 } from '../language/statements';
-import type { CheckResult, Diagnostic, QuickFix, Range, Severity, Value } from '../language/types';
-import { INPUT_NAMES, nearest, RESULT_NAMES } from '../language/vocabulary';
+import { renamedResult } from '../methods/registry';
 import { classify, DIM_LABEL, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import { formatValue } from '../units/format';
 import type { Unit } from '../units/mathInstance';
@@ -286,7 +288,7 @@ export function solveBlock(
     evaluations++;
     const entry = run(inject(x), true);
     system = entry.result.unitSystem;
-    const v = entry.result.values[symbol];
+    const v = resultValue(entry.result, symbol);
     if (!v || v.origin === 'stated' || (v.si === null && !v.infinite)) return { x, g: null };
     const scope: Scope = {
       get: (n) => quantityOf(entry, n),
@@ -546,11 +548,17 @@ function explainJump(
 }
 
 /** A value of an evaluated check as a mathjs value, for the target expression (stated ones as written). */
+/** A result by name, a renamed result's old name included. */
+function resultValue(result: CheckResult, name: string): Value | undefined {
+  return result.values[name] ?? result.values[renamedResult(result.method, name) ?? ''];
+}
+
 function quantityOf(entry: CheckScopeEntry | undefined, name: string): Unit | number | undefined {
   if (!entry) return undefined;
   const hit = entry.raw.get(name);
   if (hit !== undefined) return hit;
-  const v = entry.result.values[name];
+  // A renamed result's old name (`D` of a damage check) still reads the new one.
+  const v = entry.result.values[name] ?? entry.result.values[renamedResult(entry.result.method, name) ?? ''];
   const vec = v && v.si !== null ? vectorOf(v.dim) : undefined;
   return vec ? rawFromSI(v.si!, vec) : undefined;
 }
@@ -567,7 +575,7 @@ function record(
   v.origin = 'computed';
   v.formula = how.formula;
   v.source = how.source ?? SOLVE_SOURCE;
-  const sym = result.values[symbol];
+  const sym = resultValue(result, symbol);
   v.inputs = sym ? [{ name: symbol, display: sym.display }] : [];
   const terms: Term[] = [{ name: 'evaluations of the check', value: how.evaluations, unit: '' }];
   v.terms = terms;

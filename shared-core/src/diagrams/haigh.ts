@@ -4,7 +4,7 @@
  * yield (Langer) line, the load line through the operating point and the operating point
  * itself. Draws `HaighData` only; it computes no engineering quantity.
  */
-import type { HaighData } from '../language/types';
+import type { HaighData } from '../context/types';
 import { displayUnit, formatNumber } from '../units/format';
 import {
   AXIS_TICKS,

@@ -2,7 +2,7 @@
  * Range-mean matrix of the rainflow cycles of a damage check: one cell per bin, its
  * shade growing with the logarithm of the count. Draws the counts the core made.
  */
-import type { CheckResult } from '../language/types';
+import type { CheckResult } from '../context/types';
 import { formatCycles } from '../units/format';
 import {
   type Axis,

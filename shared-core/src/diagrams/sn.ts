@@ -4,7 +4,7 @@
  * past N2, dashed), the operating point (or, for a spectrum, its levels) and the required
  * life. Draws `SnData` only; it computes no engineering quantity.
  */
-import type { SnData } from '../language/types';
+import type { SnData } from '../context/types';
 import { displayUnit, formatCycles, formatNumber } from '../units/format';
 import {
   type Axis,

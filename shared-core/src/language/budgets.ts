@@ -4,11 +4,12 @@
  * The limits are far above any hand-written check (the samples have blocks of 10 to 40
  * lines) and low enough that the largest block allowed evaluates in milliseconds.
  */
+
+import { type CheckResult, type Diagnostic, lineRange, range } from '../context/types';
 import { defaultMethod } from '../methods/registry';
 import type { CheckScopeEntry } from './checkScope';
 import { MAX_EXPRESSION_LENGTH } from './expressions';
 import { type BlockSource, ID_PATTERN } from './markdownBlocks';
-import { type CheckResult, type Diagnostic, lineRange, range } from './types';
 
 /** Most content lines of one block that are evaluated. */
 export const MAX_BLOCK_LINES = 2_000;

@@ -1,8 +1,9 @@
 /** What a block is evaluated with, and what a finished check leaves for the checks after it. */
+
+import type { HistoryChunkReader } from '../context/checkContext';
+import type { CheckResult } from '../context/types';
 import type { UnitSystem } from '../units/format';
 import type { Unit } from '../units/mathInstance';
-import type { HistoryChunkReader } from './checkContext';
-import type { CheckResult } from './types';
 
 export interface EvaluateOptions {
   /** Display units; 'auto' follows the units the note is written in. */

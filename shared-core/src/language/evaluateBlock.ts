@@ -4,12 +4,14 @@
  * check becomes a diagnostic of that check. The note's loop is `note/noteLoop.ts`.
  */
 import { copyMethodFields, reviewCheck, runCheckMethod } from '../checks/runMethod';
+import { CheckContext, type StatedInput } from '../context/checkContext';
+import { type CheckResult, lineRange, type Range, range } from '../context/types';
+import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES, wordOwners } from '../context/vocabulary';
 import { findMaterial, nearestMaterialKeys } from '../materials';
-import { defaultMethod } from '../methods/registry';
+import { defaultMethod, renamedResult } from '../methods/registry';
 import { classify, type DimKey, sameVector, vectorOf } from '../units/dimensions';
 import type { UnitSystem } from '../units/format';
 import type { Unit } from '../units/mathInstance';
-import { CheckContext, type StatedInput } from './checkContext';
 import type { CheckScopeEntry, EvaluateOptions } from './checkScope';
 import { ExpressionError, evaluateExpression, type Quantity, rawFromSI, type Scope } from './expressions';
 import { type BlockSource, ID_PATTERN } from './markdownBlocks';
@@ -22,9 +24,7 @@ import {
   parseStatements,
   type Statement,
 } from './statements';
-import { type CheckResult, lineRange, range } from './types';
 import { detectUnitSystem, unitFixes } from './unitSystem';
-import { editDistance, INPUT_NAMES, nearest, OPTIONS, RESULT_NAMES } from './vocabulary';
 
 export function evaluateBlock(
   block: BlockSource,
@@ -68,7 +68,7 @@ export function evaluateBlock(
   try {
     checkHeader(ctx, block, seenIds);
     const scope = blockScope(raw, previous, ctx.values);
-    ctx.scope = scope;
+    ctx.evaluate = (text) => evaluateExpression(text, scope);
     for (const [name, input] of inject ?? []) {
       raw.set(name, input.q.raw);
       stated.set(name, input);
@@ -79,6 +79,7 @@ export function evaluateBlock(
     const title = optionMap.get('title')?.value.text;
     if (title) result.title = title;
     result.method = ctx.option('method') ?? defaultMethod();
+    flagOtherMethodsWords(ctx, result.method, statements);
     result.criterion = ctx.option('criterion');
     // An input the author wrote but the tool could not read (wrong unit, misspelt option,
     // unreadable line) would silently change every result: none is produced until it is fixed.
@@ -92,7 +93,7 @@ export function evaluateBlock(
     copyMethodFields(result.method, extras, result as unknown as Record<string, unknown>);
     const requireStatements = statements.filter((s) => s.kind === 'require');
     const hasErrors = ctx.diagnostics.some((d) => d.severity === 'error');
-    result.requirements = evaluateRequirements(ctx, requireStatements, scope, faults > 0);
+    result.requirements = evaluateRequirements(ctx, requireStatements, scope, faults > 0, result.method);
     if (faults === 0) reviewCheck(ctx, result.method, result.requirements, requireStatements);
     if (hasErrors) result.status = 'error';
     else if (result.requirements.length === 0) result.status = 'unchecked';
@@ -155,25 +156,88 @@ function checkHeader(ctx: CheckContext, block: BlockSource, seenIds: Map<string,
     );
 }
 
+/**
+ * A name or option that is another method's own word (`a_c` of a crack-growth check stated
+ * in a stress-life check) feeds nothing here: say so, and which method reads it.
+ */
+function flagOtherMethodsWords(ctx: CheckContext, method: string, statements: Statement[]): void {
+  for (const s of statements) {
+    const word = s.kind === 'assign' ? s.name : s.kind === 'option' ? s.key : undefined;
+    if (!word) continue;
+    const owners = wordOwners(word.text);
+    if (!owners || owners.includes(method)) continue;
+    const which = owners.map((m) => `\`method: ${m}\``).join(' or ');
+    ctx.diag(
+      'warning',
+      'word-of-other-method',
+      `\`${word.text}\` is a word of ${which} checks: this \`method: ${method}\` check does not read it`,
+      word.range,
+    );
+  }
+}
+
+/** A use of a renamed result through another check (`damage_check.D` for `D_sum`). */
+interface AliasUse {
+  check: string;
+  member: string;
+  to: string;
+}
+
+type BlockScope = Scope & { aliases: AliasUse[] };
+
 function blockScope(
   raw: Map<string, Unit | number>,
   previous: ReadonlyMap<string, CheckScopeEntry>,
   values: CheckResult['values'],
-): Scope {
+): BlockScope {
   // Names of this block: stated ones as written; computed ones (for `require:` targets
   // such as `0.5 * Se`) are built on first use.
   const self: CheckScopeEntry = { result: { values } as CheckResult, raw };
+  const aliases: AliasUse[] = [];
   return {
+    aliases,
     get: (name) => memberValue(self, name),
     hasCheck: (check) => previous.has(check),
-    member: (check, member) => memberValue(previous.get(check), member),
+    member: (check, member) => {
+      const entry = previous.get(check);
+      const v = memberValue(entry, member);
+      if (v !== undefined || !entry) return v;
+      const to = renamedResult(entry.result.method, member);
+      if (to) aliases.push({ check, member, to });
+      return to ? memberValue(entry, to) : undefined;
+    },
   };
+}
+
+/** Hints on the old names of renamed results an expression used, with the new name as a fix. */
+function flagAliases(ctx: CheckContext, scope: BlockScope, expr: { text: string; range: Range }): void {
+  for (const a of scope.aliases.splice(0)) {
+    const ref = `${a.check}.${a.member}`;
+    const at = new RegExp(`(^|[^A-Za-z0-9_.])${ref.replace('.', '\\.')}(?![A-Za-z0-9_])`).exec(expr.text);
+    const start = expr.range.start.character + (at ? at.index + at[1].length : 0);
+    const r = at ? lineRange(expr.range.start.line, start, start + ref.length) : expr.range;
+    ctx.diag(
+      'hint',
+      'renamed-result',
+      `\`${a.member}\` of \`${a.check}\` is now called \`${a.to}\`; the old name still works`,
+      r,
+      at
+        ? [
+            {
+              title: `Change to \`${a.check}.${a.to}\``,
+              edits: [{ range: r, newText: `${a.check}.${a.to}` }],
+              preferred: true,
+            },
+          ]
+        : [],
+    );
+  }
 }
 
 function readStatements(
   ctx: CheckContext,
   statements: Statement[],
-  scope: Scope,
+  scope: BlockScope,
   raw: Map<string, Unit | number>,
 ): number {
   let faults = 0;
@@ -282,7 +346,7 @@ function readOption(ctx: CheckContext, s: OptionStatement): void {
 function readAssign(
   ctx: CheckContext,
   s: AssignStatement,
-  scope: Scope,
+  scope: BlockScope,
   raw: Map<string, Unit | number>,
   lineOfName: Map<string, number>,
   statementsBelow: ReadonlyMap<string, number>,
@@ -310,7 +374,9 @@ function readAssign(
   let q: Quantity;
   try {
     q = evaluateExpression(s.expr.text, scope);
+    flagAliases(ctx, scope, s.expr);
   } catch (e) {
+    scope.aliases.length = 0;
     const err = e instanceof ExpressionError ? e : new ExpressionError('expression-error', String(e));
     const start = s.expr.range.start.character + (err.offset ?? 0);
     const r =

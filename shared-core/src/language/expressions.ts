@@ -12,41 +12,14 @@
  * thickness); anywhere else a name of the note wins over a unit (`0.04 * d`).
  */
 import type { MathNode } from 'mathjs';
+import { ExpressionError, type Quantity, type Scope } from '../context/quantity';
 import { type DimVector, isDimensionless } from '../units/dimensions';
 import { isUnit, math, type Unit, unitNamed } from '../units/mathInstance';
 
 export const MAX_EXPRESSION_LENGTH = 400;
 export const MAX_NODES = 200;
 
-export interface Quantity {
-  /** Value in SI base units (K for temperatures). */
-  si: number;
-  dim: DimVector;
-  /** The mathjs value, kept so that names used in later expressions keep their units. */
-  raw: Unit | number;
-  /** The unit the author wrote, when the expression is a plain `number unit`. */
-  statedUnit?: string;
-}
-
-export class ExpressionError extends Error {
-  constructor(
-    public readonly code: string,
-    message: string,
-    /** Offset of the offending text within the expression, when known. */
-    public readonly offset?: number,
-    public readonly length?: number,
-  ) {
-    super(message);
-  }
-}
-
-export interface Scope {
-  /** A name of this block, or `undefined`. */
-  get(name: string): Unit | number | undefined;
-  /** `check.member`; returns undefined when unknown (the evaluator reports which part). */
-  member(check: string, member: string): Unit | number | undefined;
-  hasCheck(check: string): boolean;
-}
+export { ExpressionError, type Quantity, type Scope } from '../context/quantity';
 
 type Runner = (scope: Scope) => unknown;
 

@@ -10,7 +10,7 @@
  * residue (at most 2^23 points), whatever the file. The clock is the platform's monotonic
  * `performance.now()` (read only, no other effect).
  */
-import type { HistoryChunkReader } from './checkContext';
+import type { HistoryChunkReader } from '../context/checkContext';
 
 class BudgetExceeded extends Error {
   constructor(readonly what: 'time' | 'bytes') {

@@ -29,6 +29,9 @@
  *   bore cannot be (geometry).
  * - temperatures above the melting point of the family's base metal (see `families.ts`).
  */
+
+import type { CheckContext } from '../context/checkContext';
+import { MAGNITUDE, POSITIVE } from '../context/vocabulary';
 import {
   FAMILIES,
   FAMILY_MELT_SOURCE,
@@ -38,8 +41,6 @@ import {
   type MaterialFamily,
 } from '../materials';
 import type { DimKey } from '../units/dimensions';
-import type { CheckContext } from './checkContext';
-import { MAGNITUDE, POSITIVE } from './vocabulary';
 
 export interface Implausible {
   severity: 'error' | 'warning';

@@ -2,18 +2,21 @@
  * `require: n_f >= 1.5, n_y >= 1.2, N_f >= 1e6` — each item compares a value of the check
  * with a target expression of the same dimension. An infinite life meets any `>=`.
  */
+
+import type { CheckContext } from '../context/checkContext';
+import type { RequirementResult } from '../context/types';
+import { INPUT_NAMES, nearest, RESULT_NAMES } from '../context/vocabulary';
+import { renamedResult } from '../methods/registry';
 import { classify, sameVector, vectorOf } from '../units/dimensions';
-import type { CheckContext } from './checkContext';
 import { ExpressionError, evaluateExpression, type Scope } from './expressions';
 import type { RequireStatement } from './statements';
-import type { RequirementResult } from './types';
-import { INPUT_NAMES, nearest, RESULT_NAMES } from './vocabulary';
 
 export function evaluateRequirements(
   ctx: CheckContext,
   statements: RequireStatement[],
   scope: Scope,
   withheld = false,
+  method?: string,
 ): RequirementResult[] {
   const out: RequirementResult[] = [];
   for (const s of statements) {
@@ -31,7 +34,33 @@ export function evaluateRequirements(
       };
       out.push(res);
       if (withheld) continue;
-      const v = ctx.values[symbol];
+      let v = ctx.values[symbol];
+      const renamed = !v && method ? renamedResult(method, symbol) : undefined;
+      if (renamed) {
+        ctx.diag(
+          'hint',
+          'renamed-result',
+          `\`${symbol}\` is now called \`${renamed}\` in a \`method: ${method}\` check; the old name still works`,
+          item.symbol.range,
+          [
+            {
+              title: `Change to \`${renamed}\``,
+              edits: [{ range: item.symbol.range, newText: renamed }],
+              preferred: true,
+            },
+          ],
+        );
+        v = ctx.values[renamed];
+        if (!v) {
+          ctx.diag(
+            'error',
+            'requirement-not-evaluated',
+            `\`${renamed}\` was not computed for this check (see its other diagnostics), so the requirement cannot be judged`,
+            item.symbol.range,
+          );
+          continue;
+        }
+      }
       if (!v && (symbol in RESULT_NAMES || symbol in INPUT_NAMES)) {
         ctx.diag(
           'error',

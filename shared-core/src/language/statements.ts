@@ -8,75 +8,21 @@
  * `#` starts a comment; blank lines and indentation are ignored.
  */
 
+import type { BadStatement, RequireItem, Span, SpectrumStatement, Statement } from '../context/statements';
+import { lineRange, type Range } from '../context/types';
 import type { SourceLine } from './markdownBlocks';
-import { lineRange, type Range } from './types';
 
-export interface Span {
-  text: string;
-  range: Range;
-}
-
-export interface AssignStatement {
-  kind: 'assign';
-  line: number;
-  name: Span;
-  expr: Span;
-  whole: Range;
-}
-
-export interface OptionStatement {
-  kind: 'option';
-  line: number;
-  key: Span;
-  value: Span;
-  whole: Range;
-}
-
-export interface RequireItem {
-  symbol: Span;
-  op: '>=' | '<=' | '>' | '<';
-  expr: Span;
-  whole: Span;
-}
-
-export interface RequireStatement {
-  kind: 'require';
-  line: number;
-  items: RequireItem[];
-  whole: Range;
-}
-
-export interface SolveStatement {
-  kind: 'solve';
-  line: number;
-  name: Span;
-  symbol: Span;
-  expr: Span;
-  whole: Range;
-}
-
-export interface SpectrumStatement {
-  kind: 'spectrum';
-  line: number;
-  items: Array<{ name: Span; expr: Span }>;
-  whole: Range;
-}
-
-export interface BadStatement {
-  kind: 'bad';
-  line: number;
-  code: string;
-  message: string;
-  range: Range;
-}
-
-export type Statement =
-  | AssignStatement
-  | OptionStatement
-  | RequireStatement
-  | SolveStatement
-  | SpectrumStatement
-  | BadStatement;
+export type {
+  AssignStatement,
+  BadStatement,
+  OptionStatement,
+  RequireItem,
+  RequireStatement,
+  SolveStatement,
+  Span,
+  SpectrumStatement,
+  Statement,
+} from '../context/statements';
 
 const NAME = /^[A-Za-z_][A-Za-z0-9_]*$/;
 

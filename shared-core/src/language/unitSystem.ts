@@ -2,11 +2,12 @@
  * Which unit system a check is written in (for display), and the quick fixes that add a
  * missing unit in that system.
  */
+
+import type { QuickFix } from '../context/types';
 import type { DimKey } from '../units/dimensions';
 import { displayUnit, type UnitSystem } from '../units/format';
 import { compileExpression } from './expressions';
 import type { Span, Statement } from './statements';
-import type { QuickFix } from './types';
 
 const US_UNITS = /^(ksi|kpsi|psi|in|inch|ft|lbf|kip|kips|degF|lbf\*in|lbf\*ft|kip\*in|ksi\*in\^0\.5)$/;
 

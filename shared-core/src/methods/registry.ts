@@ -4,9 +4,10 @@
  * report, templates, assumptions register, docs tests) reads it and none names a method.
  * Adding a method is one folder under `methods/` and one line here.
  */
+
+import type { CheckResult } from '../context/types';
+import { declareMethodWord, declareMethodWords } from '../context/vocabulary';
 import type { DiagramOptions } from '../diagrams/frame';
-import type { CheckResult } from '../language/types';
-import { declareMethodWord, declareMethodWords } from '../language/vocabulary';
 import { crackGrowth } from './crack-growth';
 import { damage } from './damage';
 import { stressLife } from './stress-life';
@@ -20,7 +21,7 @@ const withdraw = new Map<string, () => void>();
 function declare(m: MethodModule): void {
   withdraw.get(m.name)?.();
   const undoWord = declareMethodWord(m.name, m.meaning, m === METHODS[0]);
-  const undoWords = declareMethodWords(m.words);
+  const undoWords = declareMethodWords(m.words, m.name);
   withdraw.set(m.name, () => {
     undoWords();
     undoWord();
@@ -71,6 +72,15 @@ const NO_HEADLINE: MethodHeadline = { summary: [], preview: [], life: ['N_f'] };
 /** What the views show of a method's check: headline names and preview rows (unknown method: none). */
 export function methodViews(method: string): MethodHeadline {
   return methodModule(method)?.headline ?? methodModule(defaultMethod())?.headline ?? NO_HEADLINE;
+}
+
+/**
+ * The new name of a result a method renamed (`D` -> `D_sum` in a damage check), or
+ * undefined: the old name stays an alias with a hint.
+ */
+export function renamedResult(method: string, name: string): string | undefined {
+  const to = methodModule(method)?.words?.renamed;
+  return to && Object.hasOwn(to, name) ? to[name] : undefined;
 }
 
 /** Every template of "insert a check", in registry order. */

@@ -4,11 +4,12 @@
  * the language, the server, the client, the report and the docs tests read the registry
  * and never name a method.
  */
+
+import type { CheckContext } from '../context/checkContext';
+import type { RequireStatement } from '../context/statements';
+import type { CheckResult, MethodFields, RequirementResult } from '../context/types';
+import type { MethodWords } from '../context/vocabulary';
 import type { DiagramOptions } from '../diagrams/frame';
-import type { CheckContext } from '../language/checkContext';
-import type { RequireStatement } from '../language/statements';
-import type { CheckResult, MethodFields, RequirementResult } from '../language/types';
-import type { MethodWords } from '../language/vocabulary';
 
 /** What a method's pipeline returns beside the values it records on the context. */
 export type MethodExtras = Partial<MethodFields> & { criterion?: string };

@@ -3,10 +3,10 @@
  * mode where a block has `solve:`). Never throws.
  */
 
+import type { CheckResult, Diagnostic, NoteResult } from '../context/types';
 import { limitBlocks } from '../language/budgets';
 import type { EvaluateOptions } from '../language/checkScope';
 import { findFatigueBlocks, splitLines } from '../language/markdownBlocks';
-import type { CheckResult, Diagnostic, NoteResult } from '../language/types';
 import { BlockSequence } from './noteLoop';
 
 export function evaluateNote(text: string, options: EvaluateOptions = {}): NoteResult {

@@ -5,6 +5,8 @@
  * (`solve:`), the Markdown fallback notice and the lint switches. A sequence is used once,
  * top to bottom: each block sees the checks added before it.
  */
+
+import type { Diagnostic } from '../context/types';
 import { solveBlock } from '../design/solve';
 import { notEvaluated, overBudget } from '../language/budgets';
 import type { CheckScopeEntry, EvaluateOptions } from '../language/checkScope';
@@ -12,7 +14,6 @@ import { evaluateBlock } from '../language/evaluateBlock';
 import { MAX_NESTING } from '../language/fenceScan';
 import { historyBudget } from '../language/historyBudget';
 import { type BlockSource, ID_PATTERN } from '../language/markdownBlocks';
-import type { Diagnostic } from '../language/types';
 
 /** A block as the session keeps it between updates (its lines are read again when needed). */
 export type BlockHead = Omit<BlockSource, 'lines'>;

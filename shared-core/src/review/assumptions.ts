@@ -13,10 +13,11 @@
  *
  * It only reads the evaluation's records: nothing is computed here.
  */
+
+import type { CheckResult, Diagnostic, NoteResult, Severity } from '../context/types';
+import { OPTIONS } from '../context/vocabulary';
 import { type BlockSource, findFatigueBlocks, splitLines } from '../language/markdownBlocks';
 import { parseStatements } from '../language/statements';
-import type { CheckResult, Diagnostic, NoteResult, Severity } from '../language/types';
-import { OPTIONS } from '../language/vocabulary';
 import { defaultedOptions } from '../methods/registry';
 
 /** Diagnostic codes that announce a default although their name does not say so. */

@@ -9,7 +9,7 @@
  * (the new check's unit system, `digits` significant digits), so that a change below the
  * display precision is not reported. Pure: only the two records are read.
  */
-import type { CheckResult, CheckStatus, NoteResult, RequirementResult, Value } from '../language/types';
+import type { CheckResult, CheckStatus, NoteResult, RequirementResult, Value } from '../context/types';
 import { type DimKey, vectorOf } from '../units/dimensions';
 import { formatNumber, formatValue, type UnitSystem } from '../units/format';
 

@@ -27,11 +27,12 @@
  * Work is split in steps (one block evaluated per step) so that a caller can interleave
  * other work and abandon a stale update: nothing is committed until `finish()`.
  */
+
+import type { CheckResult, Diagnostic, NoteResult, Range } from '../context/types';
 import { limitBlocks } from '../language/budgets';
 import type { CheckScopeEntry, EvaluateOptions } from '../language/checkScope';
 import { MAX_NESTING, nestingOf } from '../language/fenceScan';
 import { type BlockSource, findFatigueBlocks, splitLines } from '../language/markdownBlocks';
-import type { CheckResult, Diagnostic, NoteResult, Range } from '../language/types';
 import { type BlockHead, BlockSequence } from '../note/noteLoop';
 
 /** One content change, as LSP sends them (applied in order; ranges refer to the text at that point). */

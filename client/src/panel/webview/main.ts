@@ -37,7 +37,15 @@ const STATUS_TEXT: Record<PanelRow['status'], string> = {
   pass: '✓ pass',
   fail: '✗ fail',
   error: '! error',
-  unchecked: '– unchecked',
+  unchecked: '– no requirement',
+};
+/** Where a value comes from, in words (the core's origin codes). */
+const ORIGIN_TEXT: Record<string, string> = {
+  stated: 'stated in the note',
+  computed: 'computed',
+  default: 'default, not stated',
+  library: 'material library',
+  reference: 'reference value',
 };
 const STATUS_ORDER: Record<PanelRow['status'], number> = { error: 0, fail: 1, unchecked: 2, pass: 3 };
 
@@ -110,7 +118,7 @@ function renderRows(): void {
       el('td', {}, r.criterion),
       el('td', { class: 'num' }, r.n_f.text),
       el('td', { class: 'num' }, r.n_y.text),
-      el('td', { class: 'num', title: r.life.name }, r.life.text ? `${r.life.name} ${r.life.text}` : ''),
+      el('td', { class: 'num', title: r.life.meaning }, r.life.text ? `${r.life.name} ${r.life.text}` : ''),
       el('td', { class: 'status' }, el('span', { class: `badge badge-${r.status}` }, STATUS_TEXT[r.status])),
     );
     rowsEl.append(tr);
@@ -200,13 +208,16 @@ function renderDerivation(items: DerivationItem[]): HTMLElement {
         el('code', { class: 'name' }, it.name),
         ' = ',
         el('strong', {}, it.display),
-        el('span', { class: 'origin' }, it.origin),
+        el('span', { class: 'origin' }, ORIGIN_TEXT[it.origin] ?? it.origin),
         el('span', { class: 'meaning' }, it.meaning),
       ),
     );
     if (it.formula) li.append(el('div', { class: 'formula' }, el('code', {}, it.formula)));
     if (it.inputs) li.append(el('div', { class: 'inputs' }, `with ${it.inputs}`));
-    if (it.tool) li.append(el('div', { class: 'tool' }, `the tool would compute ${it.tool}`));
+    if (it.tool)
+      li.append(
+        el('div', { class: 'tool' }, `stated in place of what fatigue-notes would compute: ${it.tool}`),
+      );
     if (it.assumption) li.append(el('div', { class: 'assumption' }, `assumed: ${it.assumption}`));
     for (const n of it.notes ?? []) li.append(el('div', { class: 'note' }, n));
     if (it.source) li.append(el('div', { class: 'source' }, it.source));
@@ -338,6 +349,10 @@ window.addEventListener('message', (event: MessageEvent<ToPanel>) => {
       ?.closest?.('tr')
       ?.getAttribute('data-key');
     model = msg.model;
+    if (msg.select && model.rows.some((r) => r.key === msg.select)) {
+      state.selected = msg.select;
+      vscode.setState(state);
+    }
     render();
     // Keep the keyboard where it was across live updates.
     if (focusedKey)

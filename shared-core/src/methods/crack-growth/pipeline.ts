@@ -13,6 +13,9 @@
  *   no crack.
  */
 import { type Computed, computed, infinite, MPA } from '../../computed';
+import type { CheckContext } from '../../context/checkContext';
+import type { Range } from '../../context/types';
+import { nameInfo } from '../../context/vocabulary';
 import {
   centreCrackFiniteWidth,
   criticalCrackSize,
@@ -24,9 +27,6 @@ import {
   parisLife,
   singleEdgeCrackFiniteWidth,
 } from '../../crack';
-import type { CheckContext } from '../../language/checkContext';
-import type { Range } from '../../language/types';
-import { nameInfo } from '../../language/vocabulary';
 import { type ShellKind, shellStresses } from '../../stress';
 import { formatNumber } from '../../units/format';
 import type { MethodExtras } from '../types';

@@ -1,8 +1,8 @@
 // biome-ignore-all lint/suspicious/noTemplateCurlyInString: these strings are VS Code snippets (${1:...} tab stops), not templates
 /** `method: damage`: Palmgren-Miner damage of a load history or spectrum at a section. */
 import { assumedFamily } from '../../checks/review';
+import { OPTIONS } from '../../context/vocabulary';
 import { HISTOGRAM_DIAGRAM, SN_DIAGRAM } from '../../diagrams/drawers';
-import { OPTIONS } from '../../language/vocabulary';
 import { MATERIALS } from '../../materials';
 import { materialLines, sectionLines } from '../templateParts';
 import type { MethodModule } from '../types';
@@ -12,15 +12,16 @@ export const damage: MethodModule = {
   name: 'damage',
   meaning: 'Palmgren-Miner damage of a load history or spectrum',
   docs: 'damage',
+  words: { renamed: { D: 'D_sum', D_pos: 'D_sum_pos', D_neg: 'D_sum_neg' } },
   run: runDamage,
   fields: ['sn', 'tables', 'histogram'],
   review(ctx) {
     assumedFamily(ctx);
   },
   headline: {
-    summary: ['D', 'repeats', 'N_eq'],
-    preview: ['D', 'repeats', 'N_eq', 'n_y'],
-    life: ['D', 'N_f'],
+    summary: ['D_sum', 'repeats', 'N_eq'],
+    preview: ['D_sum', 'repeats', 'N_eq', 'n_y'],
+    life: ['D_sum', 'N_f'],
   },
   diagrams: [SN_DIAGRAM, HISTOGRAM_DIAGRAM],
   snippet: {
@@ -35,7 +36,7 @@ export const damage: MethodModule = {
       'spectrum: M_a = ${6:amplitude} N*m, M_m = ${7:mean} N*m, n = ${8:cycles}',
       'miner: ${9|original,elementary,haibach|}',
       'criterion: ${10|goodman,gerber,soderberg,asme-elliptic|}',
-      'require: D <= ${11:allowed damage}',
+      'require: D_sum <= ${11:allowed damage}',
       '```',
       '$0',
     ],
@@ -44,7 +45,7 @@ export const damage: MethodModule = {
     {
       kind: 'damage',
       label: 'Variable amplitude (Palmgren-Miner damage)',
-      detail: 'a load spectrum or a rainflow-counted history, damage D and repeats',
+      detail: 'a load spectrum or a rainflow-counted history, damage D_sum and repeats',
       idStem: 'damage',
       body: (u) => [
         'method: damage',
@@ -54,11 +55,11 @@ export const damage: MethodModule = {
         'miner: ${14|original,elementary,haibach|}',
         '# one line per load level; or history: loads/FILE.csv with history-column: and history-load:',
         `spectrum: M_a = \${15:?} ${u.moment}, M_m = \${16:?} ${u.moment}, n = \${17:?}`,
-        'require: D <= ${18:?}',
+        'require: D_sum <= ${18:?}',
       ],
     },
   ],
   defaultedOptions: {
-    miner: (c) => c.values.D !== undefined,
+    miner: (c) => c.values.D_sum !== undefined,
   },
 };

@@ -13,7 +13,7 @@
  * Each cycle or level: loads -> nominal stresses (linear: the stress per unit load is computed
  * once) -> equivalent amplitude and mean at the notch -> equivalent fully reversed stress by
  * the chosen criterion -> cycles to failure on the S-N line under the chosen Miner rule.
- * In a damage check `D` names the damage (a result), not the shoulder diameter.
+ * A damage check's damage is `D_sum` (old name `D`, kept as an alias); `D` is the larger diameter, as everywhere.
  */
 
 import { chooseCriterion, needsYield, strengthSetFor } from '../../checks/criterionChoice';
@@ -23,6 +23,8 @@ import { readStrengths } from '../../checks/material';
 import { type LevelBase, readSpectrumLevels, type SpectrumLevel } from '../../checks/spectrumLevels';
 import { type DamageSection, damageSection, notchEquivalent } from '../../checks/unitLoadStresses';
 import { type Computed, computed, type MethodNote, MPA } from '../../computed';
+import type { CheckContext } from '../../context/checkContext';
+import type { CheckResult, Range, Severity, SnData } from '../../context/types';
 import { type CriterionModel, criterionModel, type StrengthSet } from '../../criteria';
 import {
   cyclesToFailure,
@@ -32,8 +34,6 @@ import {
   type MinerRule,
   repeatsToFailure,
 } from '../../damage';
-import type { CheckContext } from '../../language/checkContext';
-import type { CheckResult, Range, Severity, SnData } from '../../language/types';
 import {
   HistoryCsvReader,
   type HistoryIssue,
@@ -94,13 +94,8 @@ const LOAD_NAMES = [
 const RANGE_BINS = 10;
 /** Bins per axis of the range-mean histogram. */
 const HISTOGRAM_BINS = 16;
-/** Contributors listed in the derivation of D. */
+/** Contributors listed in the derivation of D_sum. */
 const CONTRIBUTORS_SHOWN = 5;
-
-const DAMAGE_NAME_MESSAGE =
-  'in a `method: damage` check `D` is the Miner damage (a result of the check), so it cannot state the larger ' +
-  'diameter of a shoulder or groove: take the concentration from a stress-life check of the same section ' +
-  '(e.g. `Kf = fillet_check.Kf`, `Kfs = fillet_check.Kfs`) or state `Kt` with the notch radius `r`';
 
 interface HistorySetup {
   path: string;
@@ -122,7 +117,7 @@ interface DamagePass {
   tables: NonNullable<CheckResult['tables']>;
   points: SnData['points'];
   histogram?: CheckResult['histogram'];
-  /** Inputs named in the derivation of D. */
+  /** Inputs named in the derivation of D_sum. */
   inputs: string[];
   /** Two-point sections: the damage at each point (in `sec.points` order) and the governing one. */
   pointDamage?: number[];
@@ -138,7 +133,6 @@ interface Evaluation {
 }
 
 export function runDamage(ctx: CheckContext): MethodExtras {
-  flagDamageName(ctx);
   const historyStmt = ctx.options.get('history');
   if (!historyStmt && ctx.spectrum.length === 0) {
     ctx.diag(
@@ -251,18 +245,6 @@ export function runDamage(ctx: CheckContext): MethodExtras {
     tables: pass.tables,
     ...(pass.histogram ? { histogram: pass.histogram } : {}),
   };
-}
-
-/** `D` stated as a length in a damage check: a clear error instead of a silent clash. */
-function flagDamageName(ctx: CheckContext): void {
-  for (const d of ctx.diagnostics)
-    if (d.code === 'missing-unit' && d.message.startsWith('`D` needs a unit')) {
-      d.code = 'damage-name-clash';
-      d.message = `${DAMAGE_NAME_MESSAGE}; the damage itself is computed, not stated`;
-      delete d.fixes;
-    }
-  const s = ctx.stated.get('D');
-  if (s) ctx.diag('error', 'damage-name-clash', DAMAGE_NAME_MESSAGE, s.stmt.whole);
 }
 
 function unitText(dim: DimKey, ctx: CheckContext): string {
@@ -530,7 +512,7 @@ function historyPass(
     ctx.diag(
       'error',
       'static-failure',
-      `${formatNumber(g.staticCount, 6)} counted cycles reach the static strength${at} (mean stress at or beyond the criterion's limit): the part fails statically; they are left out of D`,
+      `${formatNumber(g.staticCount, 6)} counted cycles reach the static strength${at} (mean stress at or beyond the criterion's limit): the part fails statically; they are left out of D_sum`,
       h.range,
     );
 
@@ -576,7 +558,14 @@ function historyPass(
     tables: [
       {
         title: `Damage per range bin of \`${h.path}\`${at} (${RANGE_BINS} equal bins of the load range; sigma_ar at the bin's largest cycle)`,
-        columns: [`range (${unit})`, 'cycles', 'sigma_ar max', 'N at sigma_ar max', 'damage', 'share of D'],
+        columns: [
+          `range (${unit})`,
+          'cycles',
+          'sigma_ar max',
+          'N at sigma_ar max',
+          'damage',
+          'share of D_sum',
+        ],
         rows,
       },
     ],
@@ -736,7 +725,7 @@ function spectrumPass(
           'n',
           'N',
           'damage',
-          'share of D',
+          'share of D_sum',
         ],
         rows: g.rows.map((r) => [...r.cells, D > 0 ? `${((100 * r.d) / D).toFixed(1)} %` : '0 %']),
       },
@@ -764,20 +753,22 @@ function recordDamage(
           c.sigma_ar_min < c.sigma_ar * 0.9995
             ? `${formatNumber(c.sigma_ar_min / MPA, 4)} to ${ctx.display(c.sigma_ar, 'stress')}`
             : ctx.display(c.sigma_ar, 'stress');
-        return `sigma_ar ${band}: ${formatNumber(c.count, 6)} cycle${c.count === 1 ? '' : 's'}, ${formatNumber(c.damage, 3)} (${(c.share * 100).toFixed(1)} % of D)`;
+        return `sigma_ar ${band}: ${formatNumber(c.count, 6)} cycle${c.count === 1 ? '' : 's'}, ${formatNumber(c.damage, 3)} (${(c.share * 100).toFixed(1)} % of D_sum)`;
       })
       .join('; ');
     notes.push({ code: 'contributors', severity: 'information', message: `largest contributors: ${text}` });
   }
-  // `D` stated as a length (diagnosed): the damage takes the name here.
-  ctx.stated.delete('D');
   const minerStated = ctx.options.has('miner');
   if (pass.pointDamage && pass.gov !== undefined) {
     const pts = sec.points;
     pts.forEach((p, k) => {
       ctx.result(
-        pointName('D', p),
-        computed(pass.pointDamage![k], `${pointName('D', p)} = sum of n_i / N_i at this fibre`, res.source),
+        pointName('D_sum', p),
+        computed(
+          pass.pointDamage![k],
+          `${pointName('D_sum', p)} = sum of n_i / N_i at this fibre`,
+          res.source,
+        ),
         inputs,
         { dim: 'one', range, meaning: `Miner damage of one pass at ${p.words}` },
       );
@@ -785,14 +776,14 @@ function recordDamage(
     notes.push(
       governingNote(
         ctx,
-        'D',
+        'D_sum',
         pts,
         pass.gov,
-        pts.map((p) => ctx.values[pointName('D', p)]?.display ?? ''),
+        pts.map((p) => ctx.values[pointName('D_sum', p)]?.display ?? ''),
       ),
     );
   }
-  ctx.result('D', { ...res, notes }, inputs, {
+  ctx.result('D_sum', { ...res, notes }, inputs, {
     dim: 'one',
     meaning: 'Miner damage of one pass of the history or spectrum',
     range,
@@ -812,7 +803,7 @@ function recordDamage(
     [],
     { range },
   );
-  ctx.result('repeats', repeatsToFailure(res.D), ['D'], { range });
+  ctx.result('repeats', repeatsToFailure(res.D), ['D_sum'], { range });
   ctx.result(
     'sigma_ar_max',
     computed(
@@ -824,5 +815,5 @@ function recordDamage(
     { dim: 'stress', range, meaning: 'largest equivalent fully reversed stress of the history or spectrum' },
   );
   const neq: Computed = equivalentCycles(res.D, res.sigma_ar_max, ev.line, ev.rule);
-  ctx.result('N_eq', neq, ['D', 'sigma_ar_max'], { range });
+  ctx.result('N_eq', neq, ['D_sum', 'sigma_ar_max'], { range });
 }

@@ -1,8 +1,8 @@
 // biome-ignore-all lint/suspicious/noTemplateCurlyInString: these strings are VS Code snippets (${1:...} tab stops), not templates
 /** `method: stress-life`: safety factors and life of a section from the S-N approach. */
 import { assumedFamily, hiddenFiniteLife } from '../../checks/review';
+import { OPTIONS } from '../../context/vocabulary';
 import { HAIGH_DIAGRAM, SN_DIAGRAM } from '../../diagrams/drawers';
-import { OPTIONS } from '../../language/vocabulary';
 import { MATERIALS } from '../../materials';
 import { loadLines, materialLines, sectionLines } from '../templateParts';
 import type { MethodModule } from '../types';

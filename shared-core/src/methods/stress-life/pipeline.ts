@@ -22,6 +22,9 @@ import { lazyField } from '../../checks/lazyField';
 import { active, nominalStresses } from '../../checks/loads';
 import { readStrengths } from '../../checks/material';
 import { type Computed, computed, type MethodNote } from '../../computed';
+import type { CheckContext } from '../../context/checkContext';
+import type { HaighData, SnData } from '../../context/types';
+import { nameInfo } from '../../context/vocabulary';
 import {
   type CriterionKey,
   criterionModel,
@@ -29,9 +32,6 @@ import {
   firstCycleYieldFactor,
   langerLine,
 } from '../../criteria';
-import type { CheckContext } from '../../language/checkContext';
-import type { HaighData, SnData } from '../../language/types';
-import { nameInfo } from '../../language/vocabulary';
 import { lifeAtStress, strengthAtLife } from '../../sn';
 import { type EquivalentStresses, equivalentStresses, pointEquivalentStresses } from '../../stress';
 import { biaxialVonMises } from '../../stress/biaxial';

@@ -46,6 +46,12 @@ export interface ToolAlternative {
   display: string;
   formula: string;
   source: string;
+  /** What the tool computes it with, in a checker's words: `fit`, `elastic solution`, `computed`. */
+  basis: string;
+  /** Why the tool's value is what it is: `no notch feature stated`, `from r = 2 mm, Sut = 600 MPa`. */
+  why: string;
+  /** The two in one line, as the inline hint, the hover and the panel say it: `fit 1: no notch feature stated`. */
+  label: string;
 }
 
 /** One number with its derivation: the single record behind hover, inline result, panel, report and JSON. */

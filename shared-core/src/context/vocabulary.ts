@@ -124,8 +124,8 @@ export const RESULT_NAMES: Record<string, NameInfo> = ownWords({
   n_y: { dim: 'one', meaning: 'first-cycle yield safety factor (Langer)' },
   S_f: { dim: 'stress', meaning: 'fatigue strength at the required life N' },
   N_f: { dim: 'one', meaning: 'predicted cycles to failure' },
-  D: { dim: 'one', meaning: 'Miner damage of one pass of the history or spectrum' },
-  repeats: { dim: 'one', meaning: 'passes of the history or spectrum to failure (1/D)' },
+  D_sum: { dim: 'one', meaning: 'Miner damage sum of one pass of the history or spectrum (old name D)' },
+  repeats: { dim: 'one', meaning: 'passes of the history or spectrum to failure (1/D_sum)' },
   N_eq: { dim: 'one', meaning: 'equivalent number of cycles at the largest level' },
   N_cg: { dim: 'one', meaning: 'crack-growth cycles from a_i to a_c' },
   N_insp: { dim: 'one', meaning: 'inspection interval in cycles' },
@@ -145,7 +145,7 @@ export const POINT_RESULT_BASES = [
   'n_f',
   'sigma_ar',
   'N_f',
-  'D',
+  'D_sum',
 ] as const;
 const POINT_WORDS = {
   pos: 'at the extreme fibre at +M c/I (a positive moment puts it in tension)',
@@ -292,11 +292,14 @@ const OPTION_TABLE: Record<string, OptionInfo> = {
   },
 };
 
-export const OPTIONS: Record<string, OptionInfo> = ownWords(
-  Object.fromEntries(
-    Object.entries(OPTION_TABLE).map(([k, v]) => [k, v.values ? { ...v, values: ownWords(v.values) } : v]),
-  ),
-);
+/** An option whose allowed words are a prototype-free table too. */
+function ownOptions(table: Record<string, OptionInfo>): Record<string, OptionInfo> {
+  return Object.fromEntries(
+    Object.entries(table).map(([k, v]) => [k, v.values ? { ...v, values: ownWords(v.values) } : v]),
+  );
+}
+
+export const OPTIONS: Record<string, OptionInfo> = ownWords(ownOptions(OPTION_TABLE));
 
 /**
  * Declares a word of `method:` (the registry of methods calls it for each method it lists,
@@ -321,31 +324,69 @@ export interface MethodWords {
   options?: Record<string, OptionInfo>;
   /** Of its inputs and results, those that must be strictly positive. */
   positive?: readonly string[];
+  /**
+   * Results it renamed, old name -> new name: a note that uses the old name (in `require:` or
+   * as `check_id.old`) still evaluates, with a `renamed-result` hint that offers the new one.
+   */
+  renamed?: Readonly<Record<string, string>>;
 }
+
+/** Each method's own words, and for a word no shared table has, the methods that declare it. */
+const METHOD_WORDS = new Map<string, MethodWords>();
+const OWNERS = new Map<string, Set<string>>();
 
 /**
  * Declares a method's own words (the registry calls it for each method); returns a function
- * that withdraws them. A word already declared by another table is left as it is.
+ * that withdraws them. A word the shared tables already have keeps its shared meaning
+ * everywhere but in the method's own checks; a new word belongs to the methods that declare
+ * it, and a check of another method that states it is told so (`wordOwners`).
  */
-export function declareMethodWords(words: MethodWords | undefined): () => void {
+export function declareMethodWords(words: MethodWords | undefined, method?: string): () => void {
   if (!words) return () => {};
   const added: Array<() => void> = [];
+  if (method) {
+    METHOD_WORDS.set(method, words);
+    added.push(() => METHOD_WORDS.delete(method));
+  }
+  const own = (k: string) => {
+    if (!method) return;
+    const set = OWNERS.get(k) ?? new Set<string>();
+    OWNERS.set(k, set);
+    set.add(method);
+    added.push(() => {
+      set.delete(method);
+      if (set.size === 0) OWNERS.delete(k);
+    });
+  };
   const put = <T>(table: Record<string, T>, entries: Record<string, T> | undefined) => {
     for (const [k, v] of Object.entries(entries ?? {})) {
-      if (k in table) continue;
+      if (k in table) {
+        if (OWNERS.has(k)) own(k);
+        continue;
+      }
+      own(k);
       table[k] = v;
-      added.push(() => delete table[k]);
+      added.push(() => {
+        // Still this method's word here; another method that declares it keeps it.
+        if ((OWNERS.get(k)?.size ?? 0) <= 1) delete table[k];
+      });
     }
   };
   put(INPUT_NAMES, words.inputs);
   put(RESULT_NAMES, words.results);
-  const options = Object.fromEntries(
-    Object.entries(words.options ?? {}).map(([k, v]) => [
-      k,
-      v.values ? { ...v, values: ownWords(v.values) } : v,
-    ]),
-  );
-  put(OPTIONS, options);
+  put(OPTIONS, ownOptions(words.options ?? {}));
+  // An option key two methods declare accepts the words of both (each check's hover and
+  // completion show its own method's, `optionInfo`).
+  for (const [k, o] of Object.entries(words.options ?? {})) {
+    const shared = OPTIONS[k];
+    if (!o.values || !shared?.values || shared === o || !OWNERS.get(k)?.has(method ?? '')) continue;
+    for (const [w, meaning] of Object.entries(o.values))
+      if (!Object.hasOwn(shared.values, w)) {
+        const values = shared.values;
+        values[w] = meaning;
+        added.push(() => delete values[w]);
+      }
+  }
   for (const n of words.positive ?? [])
     if (!POSITIVE.has(n)) {
       POSITIVE.add(n);
@@ -356,8 +397,30 @@ export function declareMethodWords(words: MethodWords | undefined): () => void {
   };
 }
 
-export function nameInfo(name: string): NameInfo | undefined {
-  return INPUT_NAMES[name] ?? RESULT_NAMES[name];
+/** A name's meaning; in a check of `method`, the method's own meaning first. */
+export function nameInfo(name: string, method?: string): NameInfo | undefined {
+  const own = method ? METHOD_WORDS.get(method) : undefined;
+  const mine = own && (ownEntry(own.inputs, name) ?? ownEntry(own.results, name));
+  return mine ?? INPUT_NAMES[name] ?? RESULT_NAMES[name];
+}
+
+/** An option's meaning; in a check of `method`, the method's own meaning first. */
+export function optionInfo(key: string, method?: string): OptionInfo | undefined {
+  const own = method ? METHOD_WORDS.get(method) : undefined;
+  return (own && ownEntry(own.options, key)) ?? (Object.hasOwn(OPTIONS, key) ? OPTIONS[key] : undefined);
+}
+
+function ownEntry<T>(table: Record<string, T> | undefined, key: string): T | undefined {
+  return table && Object.hasOwn(table, key) ? table[key] : undefined;
+}
+
+/**
+ * The methods whose own word `name` is (input, result or option key), or undefined for a
+ * shared word and for a word no method declares: a check of another method does not read it.
+ */
+export function wordOwners(name: string): readonly string[] | undefined {
+  const set = OWNERS.get(name);
+  return set && set.size > 0 ? [...set] : undefined;
 }
 
 /** Levenshtein distance, for "did you mean" suggestions. */

@@ -7,9 +7,9 @@
 import type { Computed } from '../computed';
 import { DIM_LABEL, type DimKey } from '../units/dimensions';
 import { formatCycles, formatValue, type UnitSystem } from '../units/format';
-import type { Quantity, Scope } from './expressions';
+import type { Quantity } from './quantity';
 import type { AssignStatement, OptionStatement, SpectrumStatement } from './statements';
-import type { Diagnostic, QuickFix, Range, Severity, Value, ValueOrigin } from './types';
+import type { Diagnostic, QuickFix, Range, Severity, ToolAlternative, Value, ValueOrigin } from './types';
 import { nameInfo, OPTIONS } from './vocabulary';
 
 export interface StatedInput {
@@ -31,6 +31,8 @@ export interface HistoryChunkReader {
 }
 
 const SURFACED = new Set(['criterion-domain', 'load-line']);
+/** Most inputs a tool alternative's `why` names with their values (beyond, their names only). */
+const TOOL_INPUTS_SHOWN = 3;
 
 export class CheckContext {
   /** Without `Object.prototype` behind it: `values[name]` answers for the check's own values only. */
@@ -46,8 +48,12 @@ export class CheckContext {
   /** The stated value whose replaced chain is being worked out (see `replacedBy`). */
   private replacing: string | null = null;
   spectrum: SpectrumStatement[] = [];
-  /** Names of the block and `check.name` references, for expressions a method evaluates itself (spectrum levels). */
-  scope?: Scope;
+  /**
+   * Evaluates an expression of the block (its names and `check.name` references) for a method
+   * that reads expressions itself (spectrum levels); throws an `ExpressionError`. The block
+   * language sets it (`language/evaluateBlock.ts`).
+   */
+  evaluate?: (text: string) => Quantity;
 
   constructor(
     readonly id: string | null,
@@ -221,7 +227,15 @@ export class CheckContext {
     name: string,
     c: Computed | null,
     inputs: string[],
-    opts: { dim?: DimKey; range?: Range; origin?: ValueOrigin; assumption?: string; meaning?: string } = {},
+    opts: {
+      dim?: DimKey;
+      range?: Range;
+      origin?: ValueOrigin;
+      assumption?: string;
+      meaning?: string;
+      /** What a stated value's tool alternative is computed with, and why it is what it is. */
+      tool?: { basis?: string; why?: string };
+    } = {},
   ): number | null {
     const dim = opts.dim ?? this.dimOf(name, 'one');
     const stated = this.stated.get(name);
@@ -239,13 +253,7 @@ export class CheckContext {
       this.markRead(name);
       const v = this.values[name];
       if (v && c) {
-        v.tool = {
-          si: c.infinite ? null : c.value,
-          ...(c.infinite ? { infinite: true } : {}),
-          display: this.display(c.value, dim, c.infinite),
-          formula: c.formula,
-          source: c.source,
-        };
+        v.tool = this.toolAlternative(c, dim, inputs, opts.tool);
       }
       return stated.q.si;
     }
@@ -279,6 +287,45 @@ export class CheckContext {
     if (opts.assumption) v.assumption = opts.assumption;
     this.put(v);
     return c.infinite ? null : c.value;
+  }
+
+  /**
+   * The tool's own value beside a stated one, with what it is computed with and why, in
+   * words a checker reads without the derivation: `fit 1: no notch feature stated`.
+   */
+  private toolAlternative(
+    c: Computed,
+    dim: DimKey,
+    inputs: string[],
+    words: { basis?: string; why?: string } = {},
+  ): ToolAlternative {
+    const display = this.display(c.value, dim, c.infinite);
+    const basis = words.basis ?? 'computed';
+    const given = this.inputsOf(inputs);
+    let why = words.why;
+    let label: string;
+    if (why) label = `${basis} ${display}: ${why}`;
+    else if (given.length > 0) {
+      why = `from ${
+        given.length <= TOOL_INPUTS_SHOWN
+          ? given.map((i) => `${i.name} = ${i.display}`).join(', ')
+          : given.map((i) => i.name).join(', ')
+      }`;
+      label = `${basis} ${display} ${why}`;
+    } else {
+      why = c.source;
+      label = `${basis} ${display}: ${why}`;
+    }
+    return {
+      si: c.infinite ? null : c.value,
+      ...(c.infinite ? { infinite: true } : {}),
+      display,
+      formula: c.formula,
+      source: c.source,
+      basis,
+      why,
+      label,
+    };
   }
 
   /** A value taken from a library (material) rather than computed. */
