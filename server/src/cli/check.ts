@@ -10,9 +10,9 @@ import { join, relative, resolve } from 'node:path';
 import { evaluateNote, type NoteResult } from '@fatigue-notes/core';
 import { decodeNote } from '../files/decode';
 import { historyReader, workspaceOf } from '../files/historyReader';
+import { automaticJobs, type CheckFormat, evaluateFiles, type FileOutcome } from './checkJobs';
 import { cliHistoryOptions, type HistoryLimits } from './historyLimits';
 import type { Io } from './io';
-import { automaticJobs, type CheckFormat, evaluateFiles, type FileOutcome } from './checkJobs';
 import { jsonOf, toSarif } from './output';
 import { VERSION } from './version';
 
