@@ -83,6 +83,7 @@ for (const [section, script, args] of [
 for (const f of [
   'server/dist/cli.js',
   'server/dist/cycles.js',
+  'server/dist/check.js',
   'client/dist/extension.js',
   'client/dist/server.js',
 ]) {
