@@ -14,6 +14,10 @@ const common = {
   logLevel: 'warning',
 };
 await build({ ...common, entryPoints: ['server/src/cli/main.ts'], outfile: 'server/dist/cli.js' });
+// `cycles` alone: the rainflow module without the language, mathjs or the language server.
+await build({ ...common, entryPoints: ['server/src/cli/cyclesMain.ts'], outfile: 'server/dist/cycles.js' });
+// `check` alone: the core without the language server's protocol libraries (cold start).
+await build({ ...common, entryPoints: ['server/src/cli/checkMain.ts'], outfile: 'server/dist/check.js' });
 if (existsSync('client/src/extension.ts')) {
   await build({
     ...common,

@@ -1,16 +1,19 @@
 /**
- * `fatigue-notes check PATH... [--format text|json|sarif]`: evaluates every check of the
- * Markdown notes given (folders searched for *.md). Exit 0: no error and no failed
+ * `fatigue-notes check PATH... [--format text|json|sarif] [--jobs N]`: evaluates every check
+ * of the Markdown notes given (folders searched for *.md), on N worker threads (default: one
+ * per core for 4 notes or more and 256 KiB or more, else the main thread; cli/checkJobs.ts),
+ * printed in the order of the files whatever the number of threads. Exit 0: no error and no failed
  * requirement; 1: an error or a failed requirement; 2: usage error or unreadable file.
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
-import { evaluateNote, headlineValues, type NoteResult } from '@fatigue-notes/core';
+import { evaluateNote, type NoteResult } from '@fatigue-notes/core';
 import { decodeNote } from '../files/decode';
 import { historyReader, workspaceOf } from '../files/historyReader';
+import { automaticJobs, type CheckFormat, evaluateFiles, type FileOutcome } from './checkJobs';
 import { cliHistoryOptions, type HistoryLimits } from './historyLimits';
 import type { Io } from './io';
-import { type FileReport, toJson, toSarif } from './output';
+import { jsonOf, toSarif } from './output';
 import { VERSION } from './version';
 
 const SKIP = new Set(['node_modules', '.git', 'dist', '.tools', 'test-output']);
@@ -41,22 +44,25 @@ export function evaluateFile(path: string, limits?: HistoryLimits): NoteResult {
   return evaluateNote(text, cliHistoryOptions(historyReader(resolve(path), workspaceOf(path)), limits));
 }
 
-function summaryLine(rel: string, r: NoteResult['checks'][number]): string {
-  const pick = headlineValues(r).map((v) => `${v.name} ${v.display}`);
-  const status = r.status.toUpperCase().padEnd(9);
-  return `${status} ${rel}:${r.range.start.line + 1} ${r.id ?? '(no id)'}${r.title ? ` — ${r.title}` : ''}${pick.length ? `  [${pick.join(', ')}]` : ''}`;
-}
-
 export async function runCheckCommand(args: string[], io: Io): Promise<number> {
   let format = 'text';
+  let jobs: number | undefined;
   const paths: string[] = [];
   for (let i = 0; i < args.length; i++) {
     const a = args[i];
     if (a === '--format' || a === '-f') {
       format = args[++i] ?? '';
     } else if (a.startsWith('--format=')) format = a.slice(9);
-    else if (a === '--help' || a === '-h') {
-      io.stdout(`usage: fatigue-notes check PATH... [--format text|json|sarif]\n`);
+    else if (a === '--jobs' || a === '-j' || a.startsWith('--jobs=')) {
+      const v = a.startsWith('--jobs=') ? a.slice(7) : (args[++i] ?? '');
+      const n = Number(v);
+      if (!/^\d+$/.test(v) || n < 1 || n > 256) {
+        io.stderr(`fatigue-notes check: --jobs must be a whole number from 1 to 256 (got "${v}")\n`);
+        return 2;
+      }
+      jobs = n;
+    } else if (a === '--help' || a === '-h') {
+      io.stdout(`usage: fatigue-notes check PATH... [--format text|json|sarif] [--jobs N]\n`);
       return 0;
     } else if (a.startsWith('-')) {
       io.stderr(`fatigue-notes check: unknown option ${a}\n`);
@@ -68,7 +74,7 @@ export async function runCheckCommand(args: string[], io: Io): Promise<number> {
     return 2;
   }
   if (paths.length === 0) {
-    io.stderr('usage: fatigue-notes check PATH... [--format text|json|sarif]\n');
+    io.stderr('usage: fatigue-notes check PATH... [--format text|json|sarif] [--jobs N]\n');
     return 2;
   }
   const files: string[] = [];
@@ -85,39 +91,62 @@ export async function runCheckCommand(args: string[], io: Io): Promise<number> {
     io.stderr(`fatigue-notes check: no Markdown note (*.md) in ${paths.join(', ')}\n`);
     return 2;
   }
-  const reports: FileReport[] = [];
+  let bytes = 0;
   for (const f of files) {
-    let result: NoteResult;
     try {
-      result = evaluateFile(f, io.historyLimits);
-    } catch (e) {
-      io.stderr(`fatigue-notes check: cannot read ${f}: ${(e as Error).message}\n`);
+      bytes += statSync(f).size;
+    } catch {
+      // an unreadable note is reported below, where it is read
+    }
+  }
+  const replies = await evaluateFiles(
+    // Inside the working folder as a relative path, elsewhere as given in full.
+    files.map((f) => {
+      const rel = relative(io.cwd, f);
+      return { file: f, rel: rel && !rel.startsWith('..') ? rel : f };
+    }),
+    format as CheckFormat,
+    jobs ?? automaticJobs(files.length, bytes),
+    io.historyLimits,
+  );
+  const reports: FileOutcome[] = [];
+  for (let i = 0; i < replies.length; i++) {
+    const r = replies[i];
+    if ('error' in r) {
+      io.stderr(`fatigue-notes check: cannot read ${files[i]}: ${r.error}\n`);
       return 2;
     }
-    // Inside the working folder as a relative path, elsewhere as given in full.
-    const rel = relative(io.cwd, f);
-    reports.push({ path: rel && !rel.startsWith('..') ? rel : f, result });
+    reports.push(r.outcome);
   }
-  const failed = reports.some(
-    (r) =>
-      r.result.diagnostics.some((d) => d.severity === 'error') ||
-      r.result.checks.some((c) => c.status === 'fail' || c.status === 'error'),
-  );
-  if (format === 'json') io.stdout(`${JSON.stringify(toJson(reports), null, 2)}\n`);
-  else if (format === 'sarif') io.stdout(`${JSON.stringify(toSarif(reports, VERSION), null, 2)}\n`);
+  const failed = reports.some((r) => r.failed);
+  if (format === 'json')
+    io.stdout(
+      `${JSON.stringify(jsonOf(reports.map((r) => r.json as NonNullable<FileOutcome['json']>)), null, 2)}\n`,
+    );
+  else if (format === 'sarif')
+    io.stdout(
+      `${JSON.stringify(
+        toSarif(
+          reports.map((r) => ({ path: r.path, result: { diagnostics: r.diagnostics ?? [] } })),
+          VERSION,
+        ),
+        null,
+        2,
+      )}\n`,
+    );
   else {
     const lines: string[] = [];
     let nChecks = 0;
     const tally = { pass: 0, fail: 0, error: 0, unchecked: 0 };
     for (const r of reports) {
-      for (const c of r.result.checks) {
-        nChecks++;
-        tally[c.status]++;
-        lines.push(summaryLine(r.path, c));
+      for (const k of ['pass', 'fail', 'error', 'unchecked'] as const) {
+        tally[k] += r.tally[k];
+        nChecks += r.tally[k];
       }
+      lines.push(...(r.checkLines ?? []));
     }
     for (const r of reports) {
-      for (const d of r.result.diagnostics) {
+      for (const d of r.diagnostics ?? []) {
         lines.push(
           `${r.path}:${d.range.start.line + 1}:${d.range.start.character + 1} ${d.severity} ${d.code} ${d.message}`,
         );

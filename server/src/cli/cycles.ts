@@ -4,8 +4,10 @@
  * Rainflow-counts one column of a load history (ASTM E1049-85 (2017) 5.4.4, three-point
  * rules, residue counted as half cycles) with the core's streaming counter. The file is read
  * in 64 KiB chunks and the output is written as it is produced, so memory stays bounded
- * whatever the size of the file (with --bins the file is read twice: once for its extremes,
- * which fix the histogram's limits, once to count).
+ * whatever the size of the file. With --bins the histogram's limits are fixed by the
+ * history's extremes, known only at its end: the cycles are kept (16 bytes and a count each)
+ * and binned at the end, in one pass over the file; a history of more than `KEPT_CYCLES`
+ * cycles is read a second time to bin them, so that memory stays bounded.
  *
  * Output, in the history's units:
  * - json: `{ "cycles": [ { "range": R, "mean": M, "count": 0.5 | 1 } ... ], "summary": {...},
@@ -32,8 +34,8 @@ import {
   RAINFLOW_SOURCE,
   RainflowCounter,
   type RainflowResult,
-  RainflowHistogram as RangeMeanHistogram,
-} from '@fatigue-notes/core';
+  RangeMeanHistogram,
+} from '@fatigue-notes/core/src/rainflow';
 import { CLI_HISTORY_LIMITS, type HistoryLimits } from './historyLimits';
 import type { Io } from './io';
 
@@ -41,6 +43,49 @@ const USAGE =
   'usage: fatigue-notes cycles FILE.csv [--column N|NAME] [--format text|json] [--gate RANGE] [--bins N]\n';
 const CHUNK = 64 * 1024;
 const FLUSH_AT = 64 * 1024;
+/** Cycles kept for the histogram of one pass (about 34 MB); more are binned in a second pass. */
+const KEPT_CYCLES = 1 << 21;
+
+/** The cycles of a history, kept until the histogram's limits are known (at most `KEPT_CYCLES`). */
+class KeptCycles {
+  range = new Float64Array(1 << 16);
+  mean = new Float64Array(1 << 16);
+  full = new Uint8Array(1 << 16);
+  length = 0;
+  /** More cycles than `KEPT_CYCLES`: none is kept, the file is read again. */
+  overflowed = false;
+  add(range: number, mean: number, count: number): void {
+    if (this.overflowed) return;
+    const n = this.length;
+    if (n === this.range.length) {
+      if (n >= KEPT_CYCLES) {
+        this.overflowed = true;
+        this.range = new Float64Array(0);
+        this.mean = new Float64Array(0);
+        this.full = new Uint8Array(0);
+        return;
+      }
+      this.range = grow(this.range, 2 * n);
+      this.mean = grow(this.mean, 2 * n);
+      const f = new Uint8Array(2 * n);
+      f.set(this.full);
+      this.full = f;
+    }
+    this.range[n] = range;
+    this.mean[n] = mean;
+    this.full[n] = count === 1 ? 1 : 0;
+    this.length = n + 1;
+  }
+  into(h: RangeMeanHistogram): void {
+    for (let i = 0; i < this.length; i++) h.add(this.range[i], this.mean[i], this.full[i] === 1 ? 1 : 0.5);
+  }
+}
+
+function grow(a: Float64Array, n: number): Float64Array<ArrayBuffer> {
+  const b = new Float64Array(n);
+  b.set(a);
+  return b;
+}
 
 interface CyclesArgs {
   file: string;
@@ -113,21 +158,18 @@ function parseArgs(args: string[]): CyclesArgs | { error: string } | { help: tru
 
 /** Collects output text and hands it to `write` in pieces of about 64 KiB. */
 class Output {
-  private parts: string[] = [];
-  private size = 0;
+  private text = '';
   /** True when the last write was refused room: the reader waits for the pipe to drain. */
   full = false;
   constructor(private readonly write: (s: string) => unknown) {}
   put(s: string): void {
-    this.parts.push(s);
-    this.size += s.length;
-    if (this.size >= FLUSH_AT) this.flush();
+    this.text += s;
+    if (this.text.length >= FLUSH_AT) this.flush();
   }
   flush(): void {
-    if (this.parts.length === 0) return;
-    this.full = this.write(this.parts.join('')) === false;
-    this.parts = [];
-    this.size = 0;
+    if (this.text.length === 0) return;
+    this.full = this.write(this.text) === false;
+    this.text = '';
   }
 }
 
@@ -244,29 +286,12 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
   }
 
   try {
-    // With --bins: a first pass for the extremes, which bound every range and mean.
-    let histogram: RangeMeanHistogram | undefined;
-    if (bins !== undefined) {
-      let lo = Number.POSITIVE_INFINITY;
-      let hi = Number.NEGATIVE_INFINITY;
-      const scan = new HistoryCsvReader({
-        column,
-        onValue: (x) => {
-          if (x < lo) lo = x;
-          if (x > hi) hi = x;
-        },
-      });
-      await feedFile(path, scan, budget);
-      if (budget.exceeded) {
-        io.stderr(issueLine(file, budget.exceeded));
-        return 1;
-      }
-      // (A spread that overflows gets no histogram: the count below stops with an error.)
-      if (!scan.fatal && lo <= hi && hi - lo <= Number.MAX_VALUE)
-        histogram = new RangeMeanHistogram(histogramLimitsFor(lo, hi, bins));
-    }
-
     const out = new Output(io.stdout);
+    // With --bins: the extremes of every sample read (they bound every range and mean) and the cycles.
+    let lo = Number.POSITIVE_INFINITY;
+    let hi = Number.NEGATIVE_INFINITY;
+    const kept = bins !== undefined ? new KeptCycles() : undefined;
+    let histogram: RangeMeanHistogram | undefined;
     let started = false;
     let rows = 0;
     let reader: HistoryCsvReader;
@@ -278,17 +303,17 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
       if (format === 'json') out.put('{"cycles":[');
       else {
         out.put(title());
-        if (!histogram) out.put(`${'range'.padStart(14)}${'mean'.padStart(14)}${'count'.padStart(7)}\n`);
+        if (!kept) out.put(`${'range'.padStart(14)}${'mean'.padStart(14)}${'count'.padStart(7)}\n`);
       }
     };
     const onCycle = (range: number, mean: number, count: number) => {
       if (!started) start();
-      if (histogram) histogram.add(range, mean, count);
+      if (kept) kept.add(range, mean, count);
       if (format === 'json') {
         out.put(
           `${rows === 0 ? '\n' : ',\n'}{"range":${JSON.stringify(range)},"mean":${JSON.stringify(mean)},"count":${count}}`,
         );
-      } else if (!histogram) {
+      } else if (!kept) {
         out.put(`${fmt(range).padStart(14)}${fmt(mean).padStart(14)}${String(count).padStart(7)}\n`);
       }
       rows++;
@@ -299,6 +324,8 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
     reader = new HistoryCsvReader({
       column,
       onValue: (x, line) => {
+        if (x < lo) lo = x;
+        if (x > hi) hi = x;
         if (!counter.push(x) && stopLine === 0) stopLine = line;
       },
     });
@@ -311,6 +338,23 @@ export async function runCyclesCommand(args: string[], io: Io): Promise<number> 
       return 1;
     }
     const result = counter.finish(); // counts the residue through onCycle
+    // (A spread that overflows gets no histogram: the count stopped with an error; nor does
+    // a history past the budget, whose count is incomplete.)
+    if (kept && !budget.exceeded && !reader.fatal && lo <= hi && hi - lo <= Number.MAX_VALUE) {
+      histogram = new RangeMeanHistogram(histogramLimitsFor(lo, hi, bins as number));
+      if (!kept.overflowed) kept.into(histogram);
+      else {
+        // Too many cycles to keep: count the file again into the histogram alone.
+        const h = histogram;
+        const again = new RainflowCounter({ gate, onCycle: (r, m, c) => h.add(r, m, c) });
+        const scan = new HistoryCsvReader({ column, onValue: (x) => again.push(x) });
+        await feedFile(path, scan, budget);
+        if (budget.exceeded) {
+          histogram = undefined;
+          issues.push(budget.exceeded);
+        } else again.finish();
+      }
+    }
     for (const n of result.notes) {
       if (!issues.some((i) => i.code === n.code)) {
         issues.push({

@@ -3,6 +3,7 @@
 import { isParseWorker, runParseWorker } from '../lsp/parseWorker';
 import { startServer } from '../lsp/server';
 import { runCheckCommand } from './check';
+import { isCheckWorker, runCheckWorker } from './checkJobs';
 import { runCompareCommand } from './compare';
 import { runCyclesCommand } from './cycles';
 import { type Io, processIo } from './io';
@@ -12,7 +13,7 @@ import { VERSION } from './version';
 const USAGE = `fatigue-notes ${VERSION}: evaluate fatigue design-check blocks in Markdown calc notes
 
 usage:
-  fatigue-notes check PATH... [--format text|json|sarif]
+  fatigue-notes check PATH... [--format text|json|sarif] [--jobs N]
   fatigue-notes cycles FILE.csv [--column N|NAME] [--format text|json] [--gate RANGE] [--bins N]
   fatigue-notes lsp --stdio
   fatigue-notes report NOTE.md [-o NOTE.html]
@@ -76,8 +77,10 @@ export async function main(argv: string[], io: Io): Promise<number> {
   }
 }
 
-// The language server runs this same bundle as its parse worker (lsp/parseWorker.ts).
+// The language server runs this same bundle as its parse worker (lsp/parseWorker.ts), and
+// `check --jobs N` as its check workers (cli/checkJobs.ts).
 if (isParseWorker()) runParseWorker();
+else if (isCheckWorker()) runCheckWorker();
 else
   main(process.argv.slice(2), processIo).then(
     (code) => {

@@ -38,20 +38,33 @@ function jsonCheck(c: CheckResult) {
   };
 }
 
-export function toJson(reports: FileReport[]) {
+/** One file's entry of the JSON output. */
+export function jsonFile(r: FileReport) {
   return {
-    version: 1,
-    files: reports.map((r) => ({
-      path: r.path,
-      checks: r.result.checks.map(jsonCheck),
-      diagnostics: r.result.diagnostics.map(jsonDiagnostic),
-    })),
+    path: r.path,
+    checks: r.result.checks.map(jsonCheck),
+    diagnostics: r.result.diagnostics.map(jsonDiagnostic),
   };
+}
+
+/** The JSON output of files whose entries are made already (`jsonFile`). */
+export function jsonOf(files: Array<ReturnType<typeof jsonFile>>) {
+  return { version: 1, files };
+}
+
+export function toJson(reports: FileReport[]) {
+  return jsonOf(reports.map(jsonFile));
 }
 
 const SARIF_LEVEL = { error: 'error', warning: 'warning', information: 'note', hint: 'note' } as const;
 
-export function toSarif(reports: FileReport[], version: string) {
+/** SARIF needs of a note only its path and diagnostics. */
+export interface SarifReport {
+  path: string;
+  result: Pick<NoteResult, 'diagnostics'>;
+}
+
+export function toSarif(reports: SarifReport[], version: string) {
   const rules = new Map<string, { id: string; shortDescription: { text: string } }>();
   const results = [];
   for (const r of reports) {
