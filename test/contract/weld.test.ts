@@ -872,3 +872,24 @@ describe('weld: a shear range takes part in the life and the safety factor (inde
     expect(c.values.N_f.infinite).toBe(true);
   });
 });
+
+describe('weld: the throat stress with a hot-spot stress type (independent hand check)', () => {
+  it('stress-type: hot-spot with the forces on a throat is wrong-stress-type on the option line, no results', () => {
+    // IIW 2016 Sec. 3.3.x (from memory): the throat of a load-carrying fillet weld is rated by
+    // its own class (FAT 36 steel) on the nominal throat stress, not by a hot-spot class.
+    const { c, text } = evaluate([
+      'method: weld',
+      'standard: iiw-2016',
+      'stress-type: hot-spot',
+      'dF_perp = 150 N/mm',
+      'a_w = 5 mm',
+      'n_w = 2',
+      'Sy = 355 MPa',
+      'gamma_Ff = 1.0',
+      'gamma_Mf = 1.0',
+      'N = 2e6',
+    ]);
+    expect(diag(c, 'wrong-stress-type').range.start.line).toBe(lineOf(text, 'stress-type:'));
+    expect(c.values.u_fat).toBeUndefined();
+  });
+});

@@ -369,7 +369,11 @@ function fmt(x: number): string {
   if (!Number.isFinite(x)) return String(x);
   // Large and small magnitudes in exponent form (2.447e11, not 244700000000).
   const a = Math.abs(x);
-  if (a !== 0 && (a >= 1e6 || a < 1e-4)) return x.toExponential(3).replace(/\.?0+e/, 'e').replace('e+', 'e');
+  if (a !== 0 && (a >= 1e6 || a < 1e-4))
+    return x
+      .toExponential(3)
+      .replace(/\.?0+e/, 'e')
+      .replace('e+', 'e');
   return String(Number(x.toPrecision(4)));
 }
 

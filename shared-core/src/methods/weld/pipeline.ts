@@ -166,6 +166,17 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   const stressed = normalStress(ctx, stressType, entry?.stressType === 'throat', loading, standard);
   if (stressed === null) return {};
   const usedType: WeldStressType = stressed.type;
+  // A stated hot-spot or notch stress type with the throat's forces: the throat stress is a
+  // nominal stress on the weld metal, rated by the throat class, not a hot-spot or notch class.
+  if (usedType === 'throat' && stressType !== 'nominal' && ctx.options.has('stress-type')) {
+    ctx.diag(
+      'error',
+      'wrong-stress-type',
+      `\`stress-type: ${stressType}\` with the forces on a throat (\`dF_perp\`, \`a_w\`): the throat stress is rated by the throat class of the weld metal; remove \`stress-type:\` or state the ${stressType} stress range at the toe instead`,
+      ctx.optionRange('stress-type')!,
+    );
+    return {};
+  }
   const hasShear = ctx.has('delta_tau') || ctx.has('tau_max') || ctx.has('tau_min');
   if (hasShear && loading.kind !== 'constant') {
     // Leaving the shear out would pass a detail that the interaction may fail.
