@@ -893,3 +893,19 @@ describe('weld: the throat stress with a hot-spot stress type (independent hand 
     expect(c.values.u_fat).toBeUndefined();
   });
 });
+
+describe('weld: a root detail with its range stated (independent hand check)', () => {
+  it('detail: cruciform-root with delta_sigma stated: read on the throat, with a warning on that line', () => {
+    const { c, text } = evaluate([
+      'method: weld',
+      'standard: en-1993-1-9',
+      'detail: cruciform-root',
+      'delta_sigma = 30 MPa',
+      'Sy = 355 MPa',
+      'gamma_Ff = 1.0',
+      'gamma_Mf = 1.0',
+      'N = 2e6',
+    ]);
+    expect(diag(c, 'throat-range-stated').range.start.line).toBe(lineOf(text, 'delta_sigma'));
+  });
+});

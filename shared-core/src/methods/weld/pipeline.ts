@@ -166,6 +166,15 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   const stressed = normalStress(ctx, stressType, entry?.stressType === 'throat', loading, standard);
   if (stressed === null) return {};
   const usedType: WeldStressType = stressed.type;
+  // A root detail rated on the throat, its range stated directly: say how it is read, since a
+  // plate stress put there would understate the throat stress.
+  if (usedType === 'throat' && !ctx.has('dF_perp') && (ctx.has('delta_sigma') || ctx.has('sigma_max')))
+    ctx.diag(
+      'warning',
+      'throat-range-stated',
+      `the detail is rated on the weld throat: the stated range is read as the stress range on the throat (force per throat area), not the plate's; a plate stress understates it: state it on the throat, or \`dF_perp\`, \`a_w\` and \`n_w\``,
+      ctx.has('delta_sigma') ? ctx.rangeOf('delta_sigma') : ctx.rangeOf('sigma_max'),
+    );
   // A stated hot-spot or notch stress type with the throat's forces: the throat stress is a
   // nominal stress on the weld metal, rated by the throat class, not a hot-spot or notch class.
   if (usedType === 'throat' && stressType !== 'nominal' && ctx.options.has('stress-type')) {
