@@ -708,8 +708,18 @@ async function main() {
     for (const name of samples) await sampleAgrees(page, palette, workspace, name);
 
     // 9. Export a report of the note with the history (the save dialog's proposed name).
-    await focusFirstEditor(page);
-    await openFile('ferry-ramp-hoist-damage.md');
+    // Quick Open can lose the keystrokes while the workbench is busy: open until the tab is active.
+    for (let attempt = 0; attempt < 3; attempt++) {
+      await focusFirstEditor(page);
+      await openFile('ferry-ramp-hoist-damage.md');
+      const active = await page
+        .locator('.tab.active[aria-label*="ferry-ramp-hoist-damage.md"]')
+        .count()
+        .catch(() => 0);
+      if (active > 0) break;
+      await page.keyboard.press('Escape');
+      await page.waitForTimeout(1000);
+    }
     await palette('fatigue-notes: Export a report');
     await page
       .waitForSelector('.quick-input-widget input', { state: 'visible', timeout: 10_000 })
