@@ -909,3 +909,25 @@ describe('weld: a root detail with its range stated (independent hand check)', (
     expect(diag(c, 'throat-range-stated').range.start.line).toBe(lineOf(text, 'delta_sigma'));
   });
 });
+
+describe('weld: a stated damage sum above the IIW recommendation (independent hand check)', () => {
+  it('D_allow = 1.0 under IIW: damage-sum-above-recommended on its line, once', () => {
+    // IIW recommendations (Hobbacher 2016) Sec. 4.3.1: D = 0.5 for variable amplitude, 0.2
+    // for non-proportional loading (from memory).
+    const { c, text } = evaluate([
+      'method: weld',
+      'standard: iiw-2016',
+      'delta_sigma_C = 71 MPa',
+      't = 20 mm',
+      'Sy = 355 MPa',
+      'gamma_Ff = 1.0',
+      'gamma_Mf = 1.0',
+      'D_allow = 1.0',
+      'spectrum: delta_sigma = 90 MPa, n = 2e5',
+      'spectrum: delta_sigma = 40 MPa, n = 1e6',
+    ]);
+    const found = c.diagnostics.filter((d) => d.code === 'damage-sum-above-recommended');
+    expect(found).toHaveLength(1);
+    expect(found[0].range.start.line).toBe(lineOf(text, 'D_allow'));
+  });
+});

@@ -287,8 +287,7 @@ export function runWeld(ctx: CheckContext): MethodExtras {
   const proportional = ctx.option('normal-shear') !== 'non-proportional';
   // Constant amplitude reads the life on the curve itself (D = 1); the permissible damage sum
   // of the standard belongs to variable amplitude (or is stated).
-  const Dallow = ctx.result(
-    'D_allow',
+  const allowed =
     loading.kind === 'constant' && !ctx.has('D_allow')
       ? computed(
           1,
@@ -298,10 +297,16 @@ export function runWeld(ctx: CheckContext): MethodExtras {
       : permissibleDamage(standard, {
           proportional,
           ...(ctx.has('D_allow') ? { stated: ctx.input('D_allow') } : {}),
-        }),
-    [],
-    { range: ctx.rangeOf('D_allow'), meaning: 'permissible damage sum' },
-  );
+        });
+  // A stated value replaces the tool's, and with it the tool's remarks: the one on the stated value itself stays.
+  if (ctx.has('D_allow'))
+    for (const n of allowed.notes ?? [])
+      if (n.code === 'damage-sum-above-recommended')
+        ctx.diag('warning', n.code, n.message, ctx.rangeOf('D_allow'));
+  const Dallow = ctx.result('D_allow', allowed, [], {
+    range: ctx.rangeOf('D_allow'),
+    meaning: 'permissible damage sum',
+  });
   const cycles: RangeCount[] =
     loading.kind === 'constant'
       ? [{ range: stressed.maxRange, count: loading.N }]
