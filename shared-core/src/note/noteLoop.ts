@@ -25,7 +25,6 @@ const KEPT_WARNINGS = new Set([
   'large-shell-opening',
   'rotating-history',
   'criterion-domain',
-  'word-of-other-method',
 ]);
 
 export type BlockHead = Omit<BlockSource, 'lines'>;
