@@ -19,6 +19,7 @@
 import { chooseCriterion, needsYield, strengthSetFor } from '../../checks/criterionChoice';
 import { governingIndex, governingNote, pointName, warnRotationAssumed } from '../../checks/criticalPoints';
 import { enduranceChain } from '../../checks/enduranceChain';
+import { reportHistoryIssues } from '../../checks/historyIssues';
 import { readStrengths } from '../../checks/material';
 import { type LevelBase, readSpectrumLevels, type SpectrumLevel } from '../../checks/spectrumLevels';
 import { type DamageSection, damageSection, notchEquivalent } from '../../checks/unitLoadStresses';
@@ -36,7 +37,6 @@ import {
 } from '../../damage';
 import {
   HistoryCsvReader,
-  type HistoryIssue,
   histogramLimitsFor,
   RAINFLOW_SOURCE,
   RainflowCounter,
@@ -335,29 +335,6 @@ function historySetup(ctx: CheckContext, range: Range): HistorySetup | null {
   };
 }
 
-/** CSV issues as diagnostics on the `history:` line, one per kind (the rows listed in it). */
-function reportIssues(ctx: CheckContext, issues: HistoryIssue[], range: Range, path: string): void {
-  const byCode = new Map<string, HistoryIssue[]>();
-  for (const i of issues) {
-    const list = byCode.get(i.code) ?? [];
-    list.push(i);
-    byCode.set(i.code, list);
-  }
-  for (const [code, list] of byCode) {
-    const shown = list
-      .slice(0, 5)
-      .map((i) => (i.line > 0 ? `line ${i.line}: ${i.message}` : i.message))
-      .join(' ');
-    const more = list.length > 5 ? ` (${list.length - 5} more)` : '';
-    const sev: Severity = list.some((i) => i.severity === 'error')
-      ? 'error'
-      : list.some((i) => i.severity === 'warning')
-        ? 'warning'
-        : 'information';
-    ctx.diag(sev, code, `\`${path}\`: ${shown}${more}`, range);
-  }
-}
-
 /** Per-cycle notes of the criterion, summed up and reported once per code. */
 class NoteTally {
   private readonly notes = new Map<string, { severity: Severity; message: string; count: number }>();
@@ -409,7 +386,7 @@ function historyPass(
     return null;
   }
   scan.end();
-  reportIssues(ctx, scan.issues, h.range, h.path);
+  reportHistoryIssues(ctx, scan.issues, h.range, h.path);
   if (scan.fatal || scan.valueCount < 3) return null;
   if (scan.badRowCount > 0) {
     // A skipped row may hold the largest load: no damage from what is left.

@@ -23,14 +23,15 @@
  * diagnostic on the line it is about, and the information notes ride on `N_f` alone.
  */
 
+import { reportHistoryIssues } from '../../checks/historyIssues';
 import { statedFamily } from '../../checks/material';
 import { readSpectrumLevels } from '../../checks/spectrumLevels';
 import { type Computed, computed, type MethodNote, type Term } from '../../computed';
 import type { CheckContext } from '../../context/checkContext';
-import type { Range, Severity, StrainLifeData } from '../../context/types';
+import type { Range, StrainLifeData } from '../../context/types';
 import { nameInfo } from '../../context/vocabulary';
 import { FAMILIES, type MaterialClass } from '../../materials';
-import { HistoryCsvReader, type HistoryIssue, TurningPointDetector } from '../../rainflow';
+import { HistoryCsvReader, TurningPointDetector } from '../../rainflow';
 import {
   compatibleCyclicCurve,
   constantAmplitudeStrainLife,
@@ -502,29 +503,6 @@ function readSpectrum(ctx: CheckContext): Loading | null {
   return { kind: 'spectrum', range: ctx.spectrum[0].whole, inputs: [], levels: out };
 }
 
-/** CSV issues as diagnostics on the `history:` line, one per kind. */
-function reportIssues(ctx: CheckContext, issues: HistoryIssue[], range: Range, path: string): void {
-  const byCode = new Map<string, HistoryIssue[]>();
-  for (const i of issues) {
-    const list = byCode.get(i.code) ?? [];
-    list.push(i);
-    byCode.set(i.code, list);
-  }
-  for (const [code, list] of byCode) {
-    const shown = list
-      .slice(0, 5)
-      .map((i) => (i.line > 0 ? `line ${i.line}: ${i.message}` : i.message))
-      .join(' ');
-    const more = list.length > 5 ? ` (${list.length - 5} more)` : '';
-    const sev: Severity = list.some((i) => i.severity === 'error')
-      ? 'error'
-      : list.some((i) => i.severity === 'warning')
-        ? 'warning'
-        : 'information';
-    ctx.diag(sev, code, `\`${path}\`: ${shown}${more}`, range);
-  }
-}
-
 /** A history of the nominal stress, read once and reduced to its turning points (SI). */
 function readHistory(ctx: CheckContext): Loading | null {
   const stmt = ctx.options.get('history')!;
@@ -635,7 +613,7 @@ function readHistory(ctx: CheckContext): Loading | null {
   }
   csv.end();
   if (!overflow && detector.finish()) keep(detector.point);
-  reportIssues(ctx, csv.issues, range, path);
+  reportHistoryIssues(ctx, csv.issues, range, path);
   if (csv.fatal) return null;
   if (csv.badRowCount > 0) {
     const n = csv.badRowCount;
