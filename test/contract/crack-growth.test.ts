@@ -5,28 +5,13 @@
  */
 import { describe, expect, it } from 'vitest';
 import { type CheckResult, evaluateNote } from '../../shared-core/src';
-import { MPA, si } from './helpers';
+import { diag, lineOf, MPA, si } from './helpers';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 function evaluate(lines: string[]): { c: CheckResult; text: string[] } {
   const text = ['```fatigue c', ...lines, '```', ''].join('\n');
   return { c: evaluateNote(text).checks[0], text: text.split('\n') };
-}
-
-function lineOf(text: string[], prefix: string): number {
-  const i = text.findIndex((l) => l.startsWith(prefix));
-  if (i < 0) throw new Error(`no line ${prefix}`);
-  return i;
-}
-
-function diag(c: CheckResult, code: string) {
-  const d = c.diagnostics.find((x) => x.code === code);
-  expect(
-    d,
-    `${code}; got ${c.diagnostics.map((x) => `${x.range.start.line}:${x.code}`).join(' ')}`,
-  ).toBeDefined();
-  return d!;
 }
 
 function expectAllFinite(c: CheckResult) {

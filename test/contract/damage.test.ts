@@ -9,7 +9,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { historyReader } from '../../server/src/files/historyReader';
 import { type CheckResult, evaluateNote, type HistoryChunkReader } from '../../shared-core/src';
-import { MPA, si } from './helpers';
+import { diag, lineOf, MPA, si } from './helpers';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
@@ -37,22 +37,6 @@ function fakeReader(files: Record<string, string>, chunk = 7): HistoryChunkReade
       return { ok: true };
     },
   };
-}
-
-/** 0-based line of the first line of `text` that starts with `prefix`. */
-function lineOf(text: string[], prefix: string): number {
-  const i = text.findIndex((l) => l.startsWith(prefix));
-  if (i < 0) throw new Error(`no line ${prefix}`);
-  return i;
-}
-
-function diag(c: CheckResult, code: string) {
-  const d = c.diagnostics.find((x) => x.code === code);
-  expect(
-    d,
-    `${code}; got ${c.diagnostics.map((x) => `${x.range.start.line}:${x.code}`).join(' ')}`,
-  ).toBeDefined();
-  return d!;
 }
 
 function expectAllFinite(c: CheckResult) {

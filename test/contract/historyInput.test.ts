@@ -5,8 +5,10 @@
  * the damage method; docs/diagnostics.md), not published values: a check never passes on
  * a history it could not read whole, and never shows NaN, Infinity or an internal error.
  */
+
 import { describe, expect, it } from 'vitest';
 import { type CheckResult, evaluateNote, type HistoryChunkReader } from '../../shared-core/src';
+import { diag, lineOf } from './helpers';
 
 function note(lines: string[], id = 'c'): string {
   return ['```fatigue ' + id, ...lines, '```', ''].join('\n');
@@ -30,21 +32,6 @@ function fakeReader(files: Record<string, string | Uint8Array>, chunk = 7): Hist
       return { ok: true };
     },
   };
-}
-
-function lineOf(text: string[], prefix: string): number {
-  const i = text.findIndex((l) => l.startsWith(prefix));
-  if (i < 0) throw new Error(`no line ${prefix}`);
-  return i;
-}
-
-function diag(c: CheckResult, code: string) {
-  const d = c.diagnostics.find((x) => x.code === code);
-  expect(
-    d,
-    `${code}; got ${c.diagnostics.map((x) => `${x.range.start.line}:${x.code}`).join(' ')}`,
-  ).toBeDefined();
-  return d!;
 }
 
 function expectNothingNonFinite(c: CheckResult) {

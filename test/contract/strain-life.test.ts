@@ -20,7 +20,7 @@ import {
   evaluateNote,
   type HistoryChunkReader,
 } from '../../shared-core/src';
-import { KSI, MPA, si } from './helpers';
+import { diag, KSI, lineOf, MPA, si } from './helpers';
 
 const GPA = 1e9;
 
@@ -78,19 +78,6 @@ const swt = (r: number) => (RQC.sf ** 2 / RQC.E) * r ** (2 * RQC.b) + RQC.sf * R
 function evaluate(lines: string[], histories?: HistoryChunkReader): { c: CheckResult; text: string[] } {
   const text = ['```fatigue c', ...lines, '```', ''].join('\n');
   return { c: evaluateNote(text, histories ? { histories } : {}).checks[0], text: text.split('\n') };
-}
-function lineOf(text: string[], prefix: string): number {
-  const i = text.findIndex((l) => l.startsWith(prefix));
-  if (i < 0) throw new Error(`no line ${prefix}`);
-  return i;
-}
-function diag(c: CheckResult, code: string) {
-  const d = c.diagnostics.find((x) => x.code === code);
-  expect(
-    d,
-    `${code}; got ${c.diagnostics.map((x) => `${x.range.start.line}:${x.code}`).join(' ')}`,
-  ).toBeDefined();
-  return d!;
 }
 function expectAllFinite(c: CheckResult) {
   for (const [name, v] of Object.entries(c.values)) {

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { type CheckResult, evaluateNote, type HistoryChunkReader } from '../../shared-core/src';
 import { checkDiagrams } from '../../shared-core/src/methods/registry';
-import { KSI, MPA, si } from './helpers';
+import { diag, KSI, lineOf, MPA, si } from './helpers';
 
 const IN = 0.0254;
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
@@ -30,21 +30,6 @@ function fakeReader(files: Record<string, string>): HistoryChunkReader {
       return { ok: true };
     },
   };
-}
-
-function lineOf(text: string[], prefix: string): number {
-  const i = text.findIndex((l) => l.startsWith(prefix));
-  if (i < 0) throw new Error(`no line ${prefix}`);
-  return i;
-}
-
-function diag(c: CheckResult, code: string) {
-  const d = c.diagnostics.find((x) => x.code === code);
-  expect(
-    d,
-    `${code}; got ${c.diagnostics.map((x) => `${x.range.start.line}:${x.code}`).join(' ')}`,
-  ).toBeDefined();
-  return d!;
 }
 
 const codes = (c: CheckResult) => c.diagnostics.map((d) => d.code);
